@@ -1,0 +1,33 @@
+/**
+ * @beamwright/link-core — the only public entry of the computation engine (plus the `./units`
+ * subpath for unit parsing, kept apart so that the UI bundle only carries mathjs where it parses).
+ * Everything is pure: no I/O, no clock, no randomness; SI units inside, dB and dBm named.
+ */
+export { LINK_CORE_VERSION } from './version.js';
+
+export {
+  LinkDesignSchema,
+  TransmitterSchema,
+  ReceiverSchema,
+  PointingSchema,
+  AtmosphereSchema,
+  ScintillationSchema,
+  LINK_DESIGN_DEFAULTS,
+  ATMOSPHERE_MODELS,
+  VISIBILITY_DEFINITIONS,
+} from './schemas/link-design.schema.js';
+export type {
+  LinkDesign,
+  LinkDesignInput,
+  TransmitterDesign,
+  ReceiverDesign,
+  PointingDesign,
+  AtmosphereDesign,
+  ScintillationDesign,
+  AtmosphereModel,
+  VisibilityDefinition,
+} from './schemas/link-design.schema.js';
+export { LinkBudgetSchema, BudgetTermSchema, BudgetCheckSchema, BUDGET_TERM_KEYS } from './schemas/link-budget.schema.js';
+export type { LinkBudget, BudgetTerm, BudgetCheck, BudgetTermKey } from './schemas/link-budget.schema.js';
+export { formatZodIssues } from './schemas/format-zod-issues.js';
+export type { FieldIssue } from './schemas/format-zod-issues.js';

@@ -1,0 +1,132 @@
+/**
+ * The link design: everything the budget of DOMAIN §8 needs, in SI units (metres, radians), with
+ * powers in dBm and losses in dB named as such. The UI's form, the API's validation pipe and the
+ * stored revisions all use this one schema.
+ *
+ * Unknown keys are rejected at every level (`z.strictObject`): a typo such as `wavelenghtM` must
+ * fail loudly with its path rather than silently fall back to a default.
+ */
+import { z } from 'zod';
+import { boundedNumber, lossDb, openProbability, REQUIRED_MESSAGE } from './fields.js';
+
+/** Defaults applied when a field is absent; evaluateLink applies the same values with `??`. */
+export const LINK_DESIGN_DEFAULTS = {
+  /** embedded-Gaussian beam quality, ISO 11146-1; 1 = ideal TEM00 */
+  m2: 1,
+  /** central obscuration of the receive aperture as a diameter ratio; 0 = unobscured */
+  obscurationRatio: 0,
+  /** Kim et al. 2001 is the preferred visibility model (DOMAIN §5.2, §13.3) */
+  atmosphereModel: 'kim',
+  /** Kim and Kruse are defined on the 2 % contrast visibility (DOMAIN §5.1) */
+  visibilityDefinition: 'contrast-2-percent',
+  /** the scintillation fade margin is part of the budget unless switched off */
+  scintillationInclude: true,
+  /** fade probability 1e-3: DOMAIN §6.7 [practice] */
+  scintillationProbability: 1e-3,
+  /** no ageing/dirt allowance unless the engineer sets one (DOMAIN §7 suggests 1–3 dB) */
+  systemMarginDb: 0,
+} as const;
+
+/** Visibility-to-attenuation models available to the budget (DOMAIN §5.2–5.3). */
+export const ATMOSPHERE_MODELS = ['kim', 'kruse'] as const;
+export type AtmosphereModel = (typeof ATMOSPHERE_MODELS)[number];
+
+/**
+ * Which contrast threshold the visibility figure uses: 2 % (classical, what Kim and Kruse assume)
+ * or 5 % (WMO meteorological optical range, what airport sensors and METAR/SYNOP report).
+ */
+export const VISIBILITY_DEFINITIONS = ['contrast-2-percent', 'mor-5-percent'] as const;
+export type VisibilityDefinition = (typeof VISIBILITY_DEFINITIONS)[number];
+
+function section<Shape extends z.core.$ZodLooseShape>(shape: Shape) {
+  return z.strictObject(shape, {
+    error: (issue) =>
+      issue.code === 'invalid_type' ? (issue.input === undefined ? REQUIRED_MESSAGE : 'must be an object') : undefined,
+  });
+}
+
+export const TransmitterSchema = section({
+  /** vacuum wavelength [m]; FSO terminals use 785, 850, 1310 or 1550 nm */
+  wavelengthM: boundedNumber({ atLeast: 200e-9, atMost: 20e-6, unitNote: { lower: '200 nm', upper: '20 µm' } }),
+  /** average optical output power [dBm] (−40 dBm = 0.1 µW … 50 dBm = 100 W) */
+  powerDbm: boundedNumber({ atLeast: -40, atMost: 50, unitNote: { lower: '−40 dBm', upper: '50 dBm (100 W)' } }),
+  /** 1/e² beam radius at the transmit aperture [m] (W0 of DOMAIN §1.3) */
+  waistRadiusM: boundedNumber({ greaterThan: 0, atMost: 1, unitNote: { upper: '1 m' } }),
+  /**
+   * measured far-field half-angle divergence, 1/e² [rad]. When it exceeds the diffraction limit
+   * M²λ/(πW0) the beam is the defocused launch of DOMAIN §1.3; otherwise it is collimated.
+   */
+  halfAngleDivergenceRad: boundedNumber({ greaterThan: 0, atMost: 0.1, unitNote: { upper: '0.1 rad (100 mrad)' } }).optional(),
+  /** beam propagation ratio M² ≥ 1 (ISO 11146-1) */
+  m2: boundedNumber({ atLeast: 1, atMost: 100 }).default(LINK_DESIGN_DEFAULTS.m2),
+  /** transmit optics and window loss [dB] */
+  opticsLossDb: lossDb(30),
+});
+
+export const ReceiverSchema = section({
+  /** clear receive aperture diameter [m] */
+  apertureDiameterM: boundedNumber({ greaterThan: 0, atMost: 2, unitNote: { upper: '2 m' } }),
+  /** minimum mean optical power for the target BER at the receiver's reference plane [dBm] */
+  sensitivityDbm: boundedNumber({ atLeast: -90, atMost: 20, unitNote: { lower: '−90 dBm', upper: '20 dBm' } }),
+  /** receive optics and window loss [dB] */
+  opticsLossDb: lossDb(30),
+  /** maximum mean optical power before the receiver saturates [dBm]; must exceed the sensitivity */
+  overloadDbm: boundedNumber({ atLeast: -90, atMost: 40, unitNote: { lower: '−90 dBm', upper: '40 dBm' } }).optional(),
+  /** central obscuration as a ratio of diameters, in [0, 1) */
+  obscurationRatio: boundedNumber({ atLeast: 0, lessThan: 1 }).default(LINK_DESIGN_DEFAULTS.obscurationRatio),
+  /** receiver half-angle field of view [rad] (DOMAIN §3.5) */
+  fieldOfViewRad: boundedNumber({ greaterThan: 0, atMost: 0.5, unitNote: { upper: '0.5 rad' } }).optional(),
+}).refine((receiver) => receiver.overloadDbm === undefined || receiver.overloadDbm > receiver.sensitivityDbm, {
+  message: 'must be greater than the sensitivity',
+  path: ['overloadDbm'],
+});
+
+export const PointingSchema = section({
+  /** zero-mean Gaussian jitter, standard deviation per axis [rad] (DOMAIN §4.1) */
+  jitterSigmaPerAxisRad: boundedNumber({ atLeast: 0, atMost: 0.1, unitNote: { upper: '0.1 rad' } }),
+  /** fixed pointing bias [rad] */
+  staticErrorRad: boundedNumber({ atLeast: 0, atMost: 0.1, unitNote: { upper: '0.1 rad' } }),
+});
+
+export const AtmosphereSchema = section({
+  model: z.enum(ATMOSPHERE_MODELS, { error: `must be one of ${ATMOSPHERE_MODELS.join(', ')}` }).default(LINK_DESIGN_DEFAULTS.atmosphereModel),
+  /** visibility [m], in the definition given by visibilityDefinition */
+  visibilityM: boundedNumber({ greaterThan: 0, atMost: 1e6, unitNote: { upper: '1000 km' } }),
+  visibilityDefinition: z
+    .enum(VISIBILITY_DEFINITIONS, { error: `must be one of ${VISIBILITY_DEFINITIONS.join(', ')}` })
+    .default(LINK_DESIGN_DEFAULTS.visibilityDefinition),
+  /** refractive-index structure parameter Cn² [m^(−2/3)], uniform along the path; 0 = no turbulence */
+  cn2: boundedNumber({ atLeast: 0, atMost: 1e-10, unitNote: { lower: '0 m^(−2/3)', upper: '1e-10 m^(−2/3)' } }),
+});
+
+export const ScintillationSchema = section({
+  /** subtract the gamma-gamma fade margin (spherical wave, aperture averaged, DOMAIN §6.5–6.7) */
+  include: z.boolean({ error: 'must be true or false' }).default(LINK_DESIGN_DEFAULTS.scintillationInclude),
+  /** probability that the irradiance falls below the margin's threshold */
+  probability: openProbability().default(LINK_DESIGN_DEFAULTS.scintillationProbability),
+});
+
+export const LinkDesignSchema = section({
+  /** path length between the terminals [m] */
+  rangeM: boundedNumber({ greaterThan: 0, atMost: 100_000, unitNote: { upper: '100 km' } }),
+  transmitter: TransmitterSchema,
+  receiver: ReceiverSchema,
+  pointing: PointingSchema,
+  atmosphere: AtmosphereSchema,
+  scintillation: ScintillationSchema.default({
+    include: LINK_DESIGN_DEFAULTS.scintillationInclude,
+    probability: LINK_DESIGN_DEFAULTS.scintillationProbability,
+  }),
+  /** ageing, window dirt and other allowances subtracted from the margin [dB] */
+  systemMarginDb: lossDb(60).default(LINK_DESIGN_DEFAULTS.systemMarginDb),
+});
+
+/** A validated design, defaults applied. */
+export type LinkDesign = z.output<typeof LinkDesignSchema>;
+/** A design as a user or client sends it: fields with defaults may be absent. */
+export type LinkDesignInput = z.input<typeof LinkDesignSchema>;
+export type TransmitterDesign = z.output<typeof TransmitterSchema>;
+export type ReceiverDesign = z.output<typeof ReceiverSchema>;
+export type PointingDesign = z.output<typeof PointingSchema>;
+export type AtmosphereDesign = z.output<typeof AtmosphereSchema>;
+export type ScintillationDesign = z.output<typeof ScintillationSchema>;
