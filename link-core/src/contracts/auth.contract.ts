@@ -1,0 +1,38 @@
+/** Sign-in and the signed-in user. */
+import { z } from 'zod';
+
+/**
+ * One role per user: `admin` manages members and settings (and may do what an engineer does),
+ * `engineer` creates and edits designs, `reviewer` approves or returns designs, `installer` reads
+ * designs and link sheets and records commissioning.
+ */
+export const ROLES = ['admin', 'engineer', 'reviewer', 'installer'] as const;
+export const RoleSchema = z.enum(ROLES);
+export type Role = z.infer<typeof RoleSchema>;
+
+export const LoginRequestSchema = z.strictObject({
+  email: z.string().trim().min(1, 'is required').max(320, 'must be at most 320 characters').email('must be an e-mail address'),
+  password: z.string().min(1, 'is required').max(1024, 'must be at most 1024 characters'),
+});
+export type LoginRequest = z.infer<typeof LoginRequestSchema>;
+
+export const LoginResponseSchema = z.object({
+  /** JWT to send as `Authorization: Bearer <token>` */
+  accessToken: z.string(),
+  /** seconds until the token expires */
+  expiresInS: z.number().int().positive(),
+});
+export type LoginResponse = z.infer<typeof LoginResponseSchema>;
+
+export const UserRefSchema = z.object({
+  id: z.uuid(),
+  displayName: z.string(),
+});
+export type UserRef = z.infer<typeof UserRefSchema>;
+
+export const MeResponseSchema = z.object({
+  user: z.object({ id: z.uuid(), email: z.string(), displayName: z.string() }),
+  organisation: z.object({ id: z.uuid(), name: z.string() }),
+  role: RoleSchema,
+});
+export type MeResponse = z.infer<typeof MeResponseSchema>;
