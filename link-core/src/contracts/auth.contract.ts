@@ -10,9 +10,14 @@ export const ROLES = ['admin', 'engineer', 'reviewer', 'installer'] as const;
 export const RoleSchema = z.enum(ROLES);
 export type Role = z.infer<typeof RoleSchema>;
 
+/** A string field whose absence reads "is required" (not zod's generic type message). */
+export function requiredString() {
+  return z.string({ error: (issue) => (issue.input === undefined ? 'is required' : 'must be text') });
+}
+
 export const LoginRequestSchema = z.strictObject({
-  email: z.string().trim().min(1, 'is required').max(320, 'must be at most 320 characters').email('must be an e-mail address'),
-  password: z.string().min(1, 'is required').max(1024, 'must be at most 1024 characters'),
+  email: requiredString().trim().min(1, 'is required').max(320, 'must be at most 320 characters').email('must be an e-mail address'),
+  password: requiredString().min(1, 'is required').max(1024, 'must be at most 1024 characters'),
 });
 export type LoginRequest = z.infer<typeof LoginRequestSchema>;
 

@@ -1,0 +1,51 @@
+import type { INestApplication } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import type { NestExpressApplication } from '@nestjs/platform-express';
+import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import express, { type NextFunction, type Request, type Response } from 'express';
+import { toErrorBody } from './common/filters/api-exception.filter.js';
+import { isUiBuilt } from './spa/ui-dist.js';
+import type { AppConfig } from './config/app.config.js';
+
+export const API_PREFIX = 'api';
+
+/**
+ * Everything the app needs besides its modules, shared by main.ts and the e2e tests so the tests
+ * exercise the same pipeline: JSON body parsing with JSON errors, the /api prefix, OpenAPI docs
+ * and the "UI not built" page.
+ */
+export function configureApp(app: INestApplication): void {
+  const expressApp = app as NestExpressApplication;
+  expressApp.disable('x-powered-by');
+  // Our own JSON parser (the app is created with bodyParser: false) so that a malformed body
+  // gets the API's error shape instead of express's HTML page.
+  expressApp.use(express.json({ limit: '1mb' }));
+  expressApp.use((error: unknown, _request: Request, response: Response, next: NextFunction) => {
+    if (!error) return next();
+    const body = toErrorBody(error);
+    response.status(body.statusCode).json(body);
+  });
+  app.setGlobalPrefix(API_PREFIX);
+  app.enableShutdownHooks();
+
+  const document = SwaggerModule.createDocument(
+    app,
+    new DocumentBuilder()
+      .setTitle('Beamwright API')
+      .setDescription('Design, review and commission free-space optical links. Errors: { statusCode, error, message, issues? }.')
+      .setVersion('0.1.0')
+      .addBearerAuth()
+      .build(),
+  );
+  SwaggerModule.setup(`${API_PREFIX}/docs`, app, document);
+
+  const config = app.get(ConfigService).get<AppConfig>('app');
+  if (config && !isUiBuilt(config.uiDistDir)) {
+    (expressApp.getHttpAdapter().getInstance() as express.Express).get('/', (_request: Request, response: Response) => {
+      response
+        .status(200)
+        .type('text/plain')
+        .send(`Beamwright API is running, but the UI is not built (no index.html in ${config.uiDistDir}).\nBuild it with: npm run build -w @beamwright/ui\nAPI: /api, documentation: /api/docs\n`);
+    });
+  }
+}

@@ -1,0 +1,5 @@
+import { SetMetadata } from '@nestjs/common';
+
+export const IS_PUBLIC_KEY = 'isPublic';
+/** Opens a route to callers without a token (the JWT guard is global). */
+export const Public = () => SetMetadata(IS_PUBLIC_KEY, true);

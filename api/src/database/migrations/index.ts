@@ -1,0 +1,7 @@
+/**
+ * Every migration, in order. The TypeORM CLI writes new files into this folder; add the class
+ * here too (the compiled app, the CLI and the tests all read this list, so no file globbing).
+ */
+import { CreateOrganisationsAndUsers1796185289124 } from './1796185289124-CreateOrganisationsAndUsers.js';
+
+export const MIGRATIONS = [CreateOrganisationsAndUsers1796185289124];
