@@ -1,5 +1,5 @@
 // Tests of the PostgreSQL helpers against a real throwaway cluster (node's test runner, no build).
-// Run: node --test scripts/
+// Run: node --test scripts/lib/postgres.test.mjs
 import assert from 'node:assert/strict';
 import fs from 'node:fs';
 import os from 'node:os';
