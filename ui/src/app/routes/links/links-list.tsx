@@ -1,0 +1,192 @@
+import { useEffect, useState } from 'react';
+import { Link as RouterLink, useSearchParams } from 'react-router-dom';
+import {
+  Body1,
+  Button,
+  Caption1,
+  Card,
+  Dropdown,
+  Field,
+  MessageBar,
+  MessageBarBody,
+  Option,
+  SearchBox,
+  Skeleton,
+  SkeletonItem,
+  Text,
+  Title2,
+  makeStyles,
+  tokens,
+} from '@fluentui/react-components';
+import { AddRegular, ChevronLeftRegular, ChevronRightRegular } from '@fluentui/react-icons';
+import { paths } from '@/config/paths';
+import { policies, useCurrentUser } from '@/lib/auth';
+import { useLinks, type LinkSortField, type LinksQuery } from '@/features/links/api/get-links';
+import { LinksTable } from '@/features/links/components/links-table';
+import type { LinkStatus } from '@/features/links/api/types';
+
+const PAGE_SIZE = 20;
+const SORT_FIELDS: readonly LinkSortField[] = ['name', 'status', 'linkMarginDb', 'rangeM', 'wavelengthM', 'updatedAt'];
+const STATUS_OPTIONS: { value: LinkStatus | ''; label: string }[] = [
+  { value: '', label: 'Any status' },
+  { value: 'draft', label: 'Draft' },
+  { value: 'in_review', label: 'In review' },
+  { value: 'approved', label: 'Approved' },
+  { value: 'installed', label: 'Installed' },
+];
+
+const useStyles = makeStyles({
+  header: { display: 'flex', alignItems: 'flex-end', justifyContent: 'space-between', columnGap: tokens.spacingHorizontalL, marginBottom: tokens.spacingVerticalL },
+  subtitle: { color: tokens.colorNeutralForeground3 },
+  toolbar: { display: 'flex', flexWrap: 'wrap', alignItems: 'flex-end', columnGap: tokens.spacingHorizontalL, rowGap: tokens.spacingVerticalS, marginBottom: tokens.spacingVerticalM },
+  search: { minWidth: '280px' },
+  card: { padding: 0, overflowX: 'auto' },
+  footer: { display: 'flex', alignItems: 'center', justifyContent: 'space-between', padding: tokens.spacingHorizontalM },
+  empty: { padding: tokens.spacingHorizontalXXL, display: 'grid', rowGap: tokens.spacingVerticalS, justifyItems: 'start' },
+});
+
+function readQuery(searchParams: URLSearchParams): LinksQuery {
+  const sortParam = searchParams.get('sort') as LinkSortField | null;
+  const page = Number(searchParams.get('page') ?? '1');
+  const status = searchParams.get('status') as LinkStatus | null;
+  return {
+    page: Number.isInteger(page) && page > 0 ? page : 1,
+    pageSize: PAGE_SIZE,
+    sort: sortParam && SORT_FIELDS.includes(sortParam) ? sortParam : 'updatedAt',
+    order: searchParams.get('order') === 'asc' ? 'asc' : 'desc',
+    status: status && STATUS_OPTIONS.some((option) => option.value === status) ? status : undefined,
+    q: searchParams.get('q') ?? undefined,
+  };
+}
+
+export function LinksListRoute() {
+  const styles = useStyles();
+  const [searchParams, setSearchParams] = useSearchParams();
+  const query = readQuery(searchParams);
+  const links = useLinks(query);
+  const role = useCurrentUser().data?.role;
+  const [searchText, setSearchText] = useState(query.q ?? '');
+
+  const update = (changes: Record<string, string | undefined>) => {
+    const next = new URLSearchParams(searchParams);
+    for (const [key, value] of Object.entries(changes)) {
+      if (value === undefined || value === '') next.delete(key);
+      else next.set(key, value);
+    }
+    setSearchParams(next, { replace: true });
+  };
+
+  // Ask the server once typing pauses, not on every key.
+  useEffect(() => {
+    const timer = window.setTimeout(() => {
+      if ((query.q ?? '') !== searchText.trim()) update({ q: searchText.trim() || undefined, page: undefined });
+    }, 250);
+    return () => window.clearTimeout(timer);
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [searchText]);
+
+  const total = links.data?.total ?? 0;
+  const pageCount = Math.max(1, Math.ceil(total / PAGE_SIZE));
+  const statusLabel = STATUS_OPTIONS.find((option) => option.value === (query.status ?? ''))?.label ?? 'Any status';
+
+  return (
+    <>
+      <div className={styles.header}>
+        <div>
+          <Title2 as="h1">Links</Title2>
+          <div>
+            <Body1 className={styles.subtitle}>Every link of your organisation, with the margin of its latest revision.</Body1>
+          </div>
+        </div>
+        {policies.canEditDesigns(role) && (
+          <RouterLink to={paths.app.newLink.getHref()} tabIndex={-1}>
+            <Button appearance="primary" icon={<AddRegular />}>
+              New link
+            </Button>
+          </RouterLink>
+        )}
+      </div>
+
+      <div className={styles.toolbar} role="search">
+        <Field label="Search">
+          <SearchBox
+            className={styles.search}
+            placeholder="Link or site name"
+            value={searchText}
+            onChange={(_, data) => setSearchText(data.value)}
+            aria-label="Search links"
+          />
+        </Field>
+        <Field label="Status">
+          <Dropdown
+            value={statusLabel}
+            selectedOptions={[query.status ?? '']}
+            onOptionSelect={(_, data) => update({ status: data.optionValue || undefined, page: undefined })}
+            aria-label="Filter by status"
+          >
+            {STATUS_OPTIONS.map((option) => (
+              <Option key={option.value || 'any'} value={option.value}>
+                {option.label}
+              </Option>
+            ))}
+          </Dropdown>
+        </Field>
+      </div>
+
+      <Card className={styles.card}>
+        {links.isError && (
+          <MessageBar intent="error">
+            <MessageBarBody>The links could not be loaded: {links.error.message}</MessageBarBody>
+          </MessageBar>
+        )}
+        {links.isPending && (
+          <Skeleton aria-label="Loading links" style={{ padding: 16, display: 'grid', rowGap: 12 }}>
+            {Array.from({ length: 5 }, (_, index) => (
+              <SkeletonItem key={index} size={32} />
+            ))}
+          </Skeleton>
+        )}
+        {links.data && links.data.items.length === 0 && (
+          <div className={styles.empty}>
+            <Text weight="semibold">No links match.</Text>
+            <Text>
+              {query.q || query.status ? 'Clear the search or the status filter to see every link.' : 'No link has been designed yet.'}
+            </Text>
+          </div>
+        )}
+        {links.data && links.data.items.length > 0 && (
+          <LinksTable
+            links={links.data.items}
+            sort={{ field: query.sort, order: query.order }}
+            onSortChange={(sort) => update({ sort: sort.field, order: sort.order, page: undefined })}
+          />
+        )}
+        {links.data && total > 0 && (
+          <div className={styles.footer}>
+            <Caption1>
+              {total} link{total === 1 ? '' : 's'} · page {query.page} of {pageCount}
+            </Caption1>
+            <div>
+              <Button
+                appearance="subtle"
+                icon={<ChevronLeftRegular />}
+                disabled={query.page <= 1}
+                onClick={() => update({ page: String(query.page - 1) })}
+                aria-label="Previous page"
+              />
+              <Button
+                appearance="subtle"
+                icon={<ChevronRightRegular />}
+                disabled={query.page >= pageCount}
+                onClick={() => update({ page: String(query.page + 1) })}
+                aria-label="Next page"
+              />
+            </div>
+          </div>
+        )}
+      </Card>
+    </>
+  );
+}
+
+export const Component = LinksListRoute;

@@ -1,0 +1,18 @@
+// Every route of the app in one place: components link with paths.x.getHref(), the router uses paths.x.path.
+export const paths = {
+  signIn: {
+    path: '/sign-in',
+    getHref: (redirectTo?: string | null) =>
+      `/sign-in${redirectTo && redirectTo !== '/' ? `?redirectTo=${encodeURIComponent(redirectTo)}` : ''}`,
+  },
+  app: {
+    root: { path: '/', getHref: () => '/' },
+    links: { path: '/links', getHref: () => '/links' },
+    newLink: { path: '/links/new', getHref: () => '/links/new' },
+    link: { path: '/links/:linkId', getHref: (linkId: string) => `/links/${encodeURIComponent(linkId)}` },
+    linkHistory: {
+      path: '/links/:linkId/history',
+      getHref: (linkId: string) => `/links/${encodeURIComponent(linkId)}/history`,
+    },
+  },
+} as const;

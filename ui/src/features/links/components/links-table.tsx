@@ -1,0 +1,141 @@
+import { useMemo } from 'react';
+import { Link as RouterLink } from 'react-router-dom';
+import {
+  DataGrid,
+  DataGridBody,
+  DataGridCell,
+  DataGridHeader,
+  DataGridHeaderCell,
+  DataGridRow,
+  Link,
+  Text,
+  Tooltip,
+  createTableColumn,
+  makeStyles,
+  tokens,
+  type SortDirection,
+  type TableColumnDefinition,
+  type TableColumnId,
+} from '@fluentui/react-components';
+import { paths } from '@/config/paths';
+import { formatDateTime, formatDistance, formatRelativeTime, formatWavelength } from '@/lib/format';
+import { MarginBadge } from '@/components/ui/margin-verdict';
+import { LinkStatusBadge } from '@/features/links/components/link-status-badge';
+import type { LinkSummary } from '@/features/links/api/types';
+import type { LinkSortField } from '@/features/links/api/get-links';
+
+const useStyles = makeStyles({
+  name: { fontWeight: tokens.fontWeightSemibold },
+  sites: { color: tokens.colorNeutralForeground3, fontSize: tokens.fontSizeBase200 },
+  nameCell: { display: 'flex', flexDirection: 'column', paddingBlock: tokens.spacingVerticalS },
+  numeric: { fontVariantNumeric: 'tabular-nums', justifyContent: 'flex-end', textAlign: 'end' },
+});
+
+export interface LinksTableProps {
+  links: LinkSummary[];
+  sort: { field: LinkSortField; order: 'asc' | 'desc' };
+  onSortChange: (sort: { field: LinkSortField; order: 'asc' | 'desc' }) => void;
+}
+
+export function LinksTable({ links, sort, onSortChange }: LinksTableProps) {
+  const styles = useStyles();
+
+  const columns = useMemo<TableColumnDefinition<LinkSummary>[]>(
+    () => [
+      createTableColumn<LinkSummary>({
+        columnId: 'name',
+        compare: (a, b) => a.name.localeCompare(b.name),
+        renderHeaderCell: () => 'Link',
+        renderCell: (link) => (
+          <div className={styles.nameCell}>
+            <Link as="span" className={styles.name}>
+              <RouterLink to={paths.app.link.getHref(link.id)} style={{ color: 'inherit', textDecoration: 'inherit' }}>
+                {link.name}
+              </RouterLink>
+            </Link>
+            {(link.siteA || link.siteB) && (
+              <span className={styles.sites}>
+                {link.siteA?.name ?? '—'} ↔ {link.siteB?.name ?? '—'}
+              </span>
+            )}
+          </div>
+        ),
+      }),
+      createTableColumn<LinkSummary>({
+        columnId: 'status',
+        compare: (a, b) => a.status.localeCompare(b.status),
+        renderHeaderCell: () => 'Status',
+        renderCell: (link) => <LinkStatusBadge status={link.status} />,
+      }),
+      createTableColumn<LinkSummary>({
+        columnId: 'linkMarginDb',
+        compare: (a, b) => a.linkMarginDb - b.linkMarginDb,
+        renderHeaderCell: () => 'Link margin',
+        renderCell: (link) => <MarginBadge linkMarginDb={link.linkMarginDb} />,
+      }),
+      createTableColumn<LinkSummary>({
+        columnId: 'rangeM',
+        compare: (a, b) => a.rangeM - b.rangeM,
+        renderHeaderCell: () => 'Range',
+        renderCell: (link) => <span className="numeric">{formatDistance(link.rangeM)}</span>,
+      }),
+      createTableColumn<LinkSummary>({
+        columnId: 'wavelengthM',
+        compare: (a, b) => a.wavelengthM - b.wavelengthM,
+        renderHeaderCell: () => 'Wavelength',
+        renderCell: (link) => <span className="numeric">{formatWavelength(link.wavelengthM)}</span>,
+      }),
+      createTableColumn<LinkSummary>({
+        columnId: 'updatedAt',
+        compare: (a, b) => a.updatedAt.localeCompare(b.updatedAt),
+        renderHeaderCell: () => 'Last change',
+        renderCell: (link) => (
+          <Tooltip content={formatDateTime(link.updatedAt)} relationship="description">
+            <Text>
+              {formatRelativeTime(link.updatedAt)} · rev. {link.latestRevision}
+            </Text>
+          </Tooltip>
+        ),
+      }),
+    ],
+    [styles],
+  );
+
+  // Sorting happens on the server (the list is paged); the grid only shows and changes the state.
+  const sortState: { sortColumn: TableColumnId; sortDirection: SortDirection } = {
+    sortColumn: sort.field,
+    sortDirection: sort.order === 'asc' ? 'ascending' : 'descending',
+  };
+
+  return (
+    <DataGrid
+      items={links}
+      columns={columns}
+      sortable
+      sortState={sortState}
+      onSortChange={(_, next) =>
+        onSortChange({ field: next.sortColumn as LinkSortField, order: next.sortDirection === 'ascending' ? 'asc' : 'desc' })
+      }
+      getRowId={(link) => link.id}
+      aria-label="Links"
+      data-testid="links-table"
+      columnSizingOptions={{
+        name: { minWidth: 240, idealWidth: 320 },
+        status: { minWidth: 120 },
+        linkMarginDb: { minWidth: 170 },
+      }}
+      resizableColumns
+    >
+      <DataGridHeader>
+        <DataGridRow>{({ renderHeaderCell }) => <DataGridHeaderCell>{renderHeaderCell()}</DataGridHeaderCell>}</DataGridRow>
+      </DataGridHeader>
+      <DataGridBody<LinkSummary>>
+        {({ item, rowId }) => (
+          <DataGridRow<LinkSummary> key={rowId} data-link-id={item.id}>
+            {({ renderCell }) => <DataGridCell>{renderCell(item)}</DataGridCell>}
+          </DataGridRow>
+        )}
+      </DataGridBody>
+    </DataGrid>
+  );
+}

@@ -1,0 +1,110 @@
+import { env } from '@/config/env';
+import { clearSessionToken, getSessionToken } from '@/lib/session-token';
+
+/** A field-level problem reported by the api (400) in the link-core `formatZodIssues` shape. */
+export interface ApiFieldIssue {
+  path: string;
+  message: string;
+}
+
+/** The api's error body: `{ statusCode, error, message, issues? }`. */
+export interface ApiErrorBody {
+  statusCode: number;
+  error?: string;
+  message?: string | string[];
+  issues?: ApiFieldIssue[];
+  [extra: string]: unknown;
+}
+
+export class ApiError extends Error {
+  readonly status: number;
+  readonly body: ApiErrorBody | null;
+
+  constructor(status: number, body: ApiErrorBody | null, fallbackMessage: string) {
+    const message = Array.isArray(body?.message) ? body.message.join('; ') : body?.message;
+    super(message || fallbackMessage);
+    this.name = 'ApiError';
+    this.status = status;
+    this.body = body;
+  }
+
+  get issues(): ApiFieldIssue[] {
+    return Array.isArray(this.body?.issues) ? this.body.issues : [];
+  }
+}
+
+export function isApiError(error: unknown, status?: number): error is ApiError {
+  return error instanceof ApiError && (status === undefined || error.status === status);
+}
+
+type QueryValue = string | number | boolean | null | undefined;
+
+export interface RequestOptions {
+  params?: Record<string, QueryValue>;
+  signal?: AbortSignal;
+  /** false for the sign-in call itself: a 401 there means wrong credentials, not an expired session */
+  authenticated?: boolean;
+}
+
+function buildUrl(path: string, params?: Record<string, QueryValue>): string {
+  const base = env.API_URL.replace(/\/$/, '');
+  const url = `${base}${path.startsWith('/') ? path : `/${path}`}`;
+  if (!params) return url;
+  const search = new URLSearchParams();
+  for (const [key, value] of Object.entries(params)) {
+    if (value !== undefined && value !== null && value !== '') search.set(key, String(value));
+  }
+  const query = search.toString();
+  return query ? `${url}?${query}` : url;
+}
+
+async function readBody(response: Response): Promise<unknown> {
+  if (response.status === 204) return null;
+  const text = await response.text();
+  if (!text) return null;
+  try {
+    return JSON.parse(text);
+  } catch {
+    return text;
+  }
+}
+
+async function request<T>(method: string, path: string, body: unknown, options: RequestOptions = {}): Promise<T> {
+  const authenticated = options.authenticated ?? true;
+  const headers: Record<string, string> = { Accept: 'application/json' };
+  if (body !== undefined) headers['Content-Type'] = 'application/json';
+  const token = authenticated ? getSessionToken() : null;
+  if (token) headers.Authorization = `Bearer ${token}`;
+
+  let response: Response;
+  try {
+    response = await fetch(buildUrl(path, options.params), {
+      method,
+      headers,
+      body: body === undefined ? undefined : JSON.stringify(body),
+      signal: options.signal,
+    });
+  } catch (cause) {
+    if (cause instanceof DOMException && cause.name === 'AbortError') throw cause;
+    throw new ApiError(0, null, 'The server could not be reached. Check your connection and try again.');
+  }
+
+  const payload = await readBody(response);
+  if (!response.ok) {
+    // An authenticated call refused with 401 means the session is over: dropping the token
+    // makes the route guard send the user back to the sign-in page.
+    if (response.status === 401 && authenticated) clearSessionToken();
+    const errorBody = payload && typeof payload === 'object' ? (payload as ApiErrorBody) : null;
+    throw new ApiError(response.status, errorBody, `Request failed (${response.status} ${response.statusText || 'error'})`);
+  }
+  return payload as T;
+}
+
+/** The one api client of the app. */
+export const api = {
+  get: <T>(path: string, options?: RequestOptions) => request<T>('GET', path, undefined, options),
+  post: <T>(path: string, body?: unknown, options?: RequestOptions) => request<T>('POST', path, body ?? {}, options),
+  put: <T>(path: string, body?: unknown, options?: RequestOptions) => request<T>('PUT', path, body ?? {}, options),
+  patch: <T>(path: string, body?: unknown, options?: RequestOptions) => request<T>('PATCH', path, body ?? {}, options),
+  delete: <T>(path: string, options?: RequestOptions) => request<T>('DELETE', path, undefined, options),
+};

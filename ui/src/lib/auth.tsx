@@ -1,0 +1,84 @@
+import { useSyncExternalStore, type ReactNode } from 'react';
+import { Navigate, Outlet, useLocation } from 'react-router-dom';
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { api, isApiError } from '@/lib/api-client';
+import { clearSessionToken, getSessionToken, setSessionToken, subscribeToSessionToken } from '@/lib/session-token';
+import { paths } from '@/config/paths';
+
+import type { LoginRequest, LoginResponse, MeResponse, Role } from '@beamwright/link-core/contracts';
+
+export type { Role } from '@beamwright/link-core/contracts';
+export type SignInInput = LoginRequest;
+export type SignInResponse = LoginResponse;
+export type CurrentUser = MeResponse;
+
+/** What each role may do in the UI; the api enforces the same rules independently. */
+export const policies = {
+  canEditDesigns: (role: Role | undefined) => role === 'engineer' || role === 'admin',
+  canReview: (role: Role | undefined) => role === 'reviewer' || role === 'admin',
+};
+
+export const ROLE_LABELS: Record<Role, string> = {
+  admin: 'Administrator',
+  engineer: 'Link engineer',
+  reviewer: 'Reviewer',
+  installer: 'Installer',
+};
+
+export function useSessionToken(): string | null {
+  return useSyncExternalStore(subscribeToSessionToken, getSessionToken, () => null);
+}
+
+export const getCurrentUser = ({ signal }: { signal?: AbortSignal } = {}) => api.get<CurrentUser>('/auth/me', { signal });
+
+export const getCurrentUserQueryOptions = () =>
+  queryOptions({ queryKey: ['auth', 'me'], queryFn: ({ signal }) => getCurrentUser({ signal }), staleTime: 5 * 60_000 });
+
+/** The signed-in user; only call below <RequireSession>, which waits for it. */
+export function useCurrentUser() {
+  const token = useSessionToken();
+  return useQuery({ ...getCurrentUserQueryOptions(), enabled: token !== null });
+}
+
+export function useSignIn() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: SignInInput) => api.post<SignInResponse>('/auth/login', input, { authenticated: false }),
+    onSuccess: (response) => {
+      queryClient.clear();
+      setSessionToken(response.accessToken, response.expiresInS);
+    },
+  });
+}
+
+export function useSignOut() {
+  const queryClient = useQueryClient();
+  return () => {
+    clearSessionToken();
+    // Nothing fetched for one user may be shown to the next.
+    queryClient.clear();
+  };
+}
+
+/**
+ * Route guard: without a session the user goes to the sign-in page (coming back here afterwards);
+ * with one, the children render once the user's profile has loaded. The api client clears the
+ * token on any 401, which re-renders this guard into the redirect.
+ */
+export function RequireSession({ children, fallback }: { children?: ReactNode; fallback?: ReactNode }) {
+  const token = useSessionToken();
+  const location = useLocation();
+  const currentUser = useCurrentUser();
+
+  if (token === null) {
+    return <Navigate to={paths.signIn.getHref(`${location.pathname}${location.search}`)} replace />;
+  }
+  if (currentUser.isPending) return <>{fallback ?? null}</>;
+  if (currentUser.isError) {
+    if (isApiError(currentUser.error, 401)) {
+      return <Navigate to={paths.signIn.getHref(`${location.pathname}${location.search}`)} replace />;
+    }
+    throw currentUser.error;
+  }
+  return <>{children ?? <Outlet />}</>;
+}

@@ -1,0 +1,19 @@
+import { StrictMode } from 'react';
+import { createRoot } from 'react-dom/client';
+import '@fontsource/open-sans/400.css';
+import '@fontsource/open-sans/600.css';
+import '@fontsource/open-sans/700.css';
+import './index.css';
+import { AppProvider } from '@/app/provider';
+import { AppRouter } from '@/app/router';
+
+const container = document.getElementById('root');
+if (!container) throw new Error('The page has no #root element');
+
+createRoot(container).render(
+  <StrictMode>
+    <AppProvider>
+      <AppRouter />
+    </AppProvider>
+  </StrictMode>,
+);

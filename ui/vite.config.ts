@@ -1,0 +1,37 @@
+/// <reference types="vitest/config" />
+import { defineConfig, defaultClientConditions } from 'vite';
+import react from '@vitejs/plugin-react';
+import { fileURLToPath } from 'node:url';
+
+// The api serves the built UI from the same origin; in development the dev server forwards /api.
+const apiTarget = process.env.BEAMWRIGHT_API_URL ?? 'http://127.0.0.1:3000';
+
+export default defineConfig({
+  plugins: [react()],
+  resolve: {
+    alias: { '@': fileURLToPath(new URL('./src', import.meta.url)) },
+    // Read link-core from its TypeScript source. Setting conditions replaces Vite's defaults,
+    // so spread them back in after ours.
+    conditions: ['@beamwright/source', ...defaultClientConditions],
+  },
+  server: {
+    port: Number(process.env.UI_DEV_PORT ?? 5173),
+    strictPort: true,
+    proxy: { '/api': { target: apiTarget, changeOrigin: false } },
+  },
+  build: {
+    outDir: 'dist',
+    emptyOutDir: true,
+    sourcemap: true,
+    // The initial-JS budget (250 kB gzip) is checked by scripts/report-bundle.mjs; this only warns.
+    chunkSizeWarningLimit: 900,
+  },
+  test: {
+    environment: 'jsdom',
+    globals: false,
+    setupFiles: ['./vitest.setup.ts'],
+    include: ['src/**/*.test.{ts,tsx}'],
+    css: false,
+    server: { deps: { inline: [/@fluentui/] } },
+  },
+});
