@@ -164,3 +164,29 @@ export function formatDegreesMinutesSeconds(angleDeg: number, options: { seconds
   const seconds = (secondUnits / scale).toFixed(decimals).padStart(decimals > 0 ? decimals + 3 : 2, '0');
   return `${sign}${degrees}${degreeMark}${String(minutes).padStart(2, '0')}${minuteMark}${seconds}${secondMark}`;
 }
+
+/**
+ * Parses an angle written in degrees, minutes and seconds (or decimal degrees) into decimal degrees.
+ * Accepts ° ′ ″ (or d ' " and the ASCII apostrophes), spaces as separators, a leading sign or a
+ * trailing hemisphere letter N/S/E/W (S and W negative): "−37°57′03.72030″", "144d25'29.5244\"E",
+ * "37 57 3.7203 S", "-37.95".
+ *
+ * @param text the angle as typed
+ * @returns decimal degrees, or null when the text is not an angle (minutes or seconds ≥ 60 are rejected)
+ * @see ISO 6709:2022, "Standard representation of geographic point location by coordinates" (sexagesimal forms).
+ */
+export function parseDegreesMinutesSeconds(text: string): number | null {
+  const trimmed = text.trim().replace(/[−–]/g, '-');
+  const match = /^([+-])?\s*(\d+(?:\.\d+)?)\s*(?:°|d)?\s*(?:(\d+(?:\.\d+)?)\s*(?:′|')?\s*(?:(\d+(?:\.\d+)?)\s*(?:″|"|'')?)?)?\s*([NSEWnsew])?$/.exec(trimmed);
+  if (!match) return null;
+  const [, sign, degreesText, minutesText, secondsText, hemisphere] = match;
+  const degrees = Number(degreesText);
+  const minutes = minutesText ? Number(minutesText) : 0;
+  const seconds = secondsText ? Number(secondsText) : 0;
+  if (!Number.isFinite(degrees) || minutes >= 60 || seconds >= 60) return null;
+  if ((minutesText || secondsText) && !Number.isInteger(degrees)) return null;
+  const negative = sign === '-' || (hemisphere !== undefined && /[SWsw]/.test(hemisphere));
+  if (sign === '-' && hemisphere !== undefined && /[SWsw]/.test(hemisphere)) return null;
+  const value = degrees + minutes / 60 + seconds / 3600;
+  return negative ? -value : value;
+}
