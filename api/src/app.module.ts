@@ -16,6 +16,7 @@ import { AuthModule } from './auth/auth.module.js';
 import { HealthModule } from './health/health.module.js';
 import { OrganisationsModule } from './organisations/organisations.module.js';
 import { UsersModule } from './users/users.module.js';
+import { SitesModule } from './sites/sites.module.js';
 import { API_PATH_PATTERN, isUiBuilt } from './spa/ui-dist.js';
 
 @Module({
@@ -48,6 +49,7 @@ import { API_PATH_PATTERN, isUiBuilt } from './spa/ui-dist.js';
     UsersModule,
     AuthModule,
     HealthModule,
+    SitesModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: JwtAuthGuard },

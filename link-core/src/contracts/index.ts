@@ -6,3 +6,5 @@
 export * from './error.contract.js';
 export * from './auth.contract.js';
 export * from './health.contract.js';
+export * from './common.contract.js';
+export * from './sites.contract.js';

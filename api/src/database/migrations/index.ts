@@ -3,5 +3,6 @@
  * here too (the compiled app, the CLI and the tests all read this list, so no file globbing).
  */
 import { CreateOrganisationsAndUsers1796185289124 } from './1796185289124-CreateOrganisationsAndUsers.js';
+import { CreateSites1796185423186 } from './1796185423186-CreateSites.js';
 
-export const MIGRATIONS = [CreateOrganisationsAndUsers1796185289124];
+export const MIGRATIONS = [CreateOrganisationsAndUsers1796185289124, CreateSites1796185423186];

@@ -1,0 +1,21 @@
+/**
+ * Settings the e2e tests run with. The database comes from DATABASE_* (the root `npm test` points
+ * them at its throwaway cluster); the secret is a test-only value unless one is given.
+ */
+export function applyTestEnv(): void {
+  process.env.NODE_ENV ??= 'test';
+  process.env.JWT_SECRET ??= 'test-only-secret-not-for-production';
+  process.env.JWT_EXPIRES_IN ??= '15m';
+  // The e2e tests do not need the built UI; an empty folder keeps them independent of it.
+  process.env.UI_DIST_DIR ??= '/nonexistent/beamwright-ui-dist';
+}
+
+export function databaseSettingsFromEnv() {
+  return {
+    host: process.env.DATABASE_HOST ?? '127.0.0.1',
+    port: Number(process.env.DATABASE_PORT ?? 5433),
+    username: process.env.DATABASE_USER ?? 'beamwright',
+    password: process.env.DATABASE_PASSWORD ?? 'beamwright',
+    database: process.env.DATABASE_NAME ?? 'beamwright',
+  };
+}

@@ -1,0 +1,45 @@
+/** Sites: the rooftops and masts that carry terminals, per organisation. */
+import { z } from 'zod';
+import { IsoDateTimeSchema, numberField, textField } from './common.contract.js';
+
+const siteFields = {
+  name: textField({ min: 1, max: 200 }),
+  /** WGS 84 geodetic latitude [degrees], north positive */
+  latitudeDeg: numberField({ min: -90, max: 90 }),
+  /** WGS 84 longitude [degrees], east positive */
+  longitudeDeg: numberField({ min: -180, max: 180 }),
+  /** ground (or roof base) elevation above mean sea level [m] */
+  groundElevationM: numberField({ min: -500, max: 9000 }),
+  /** height of the terminal mount above the ground elevation [m] */
+  mountHeightM: numberField({ min: 0, max: 1000 }),
+  notes: textField({ max: 4000 }).default(''),
+};
+
+export const CreateSiteRequestSchema = z.strictObject(siteFields);
+export type CreateSiteRequest = z.input<typeof CreateSiteRequestSchema>;
+
+export const UpdateSiteRequestSchema = z.strictObject({
+  name: siteFields.name.optional(),
+  latitudeDeg: siteFields.latitudeDeg.optional(),
+  longitudeDeg: siteFields.longitudeDeg.optional(),
+  groundElevationM: siteFields.groundElevationM.optional(),
+  mountHeightM: siteFields.mountHeightM.optional(),
+  notes: textField({ max: 4000 }).optional(),
+});
+export type UpdateSiteRequest = z.input<typeof UpdateSiteRequestSchema>;
+
+export const SiteResponseSchema = z.object({
+  id: z.uuid(),
+  name: z.string(),
+  latitudeDeg: z.number(),
+  longitudeDeg: z.number(),
+  groundElevationM: z.number(),
+  mountHeightM: z.number(),
+  notes: z.string(),
+  createdAt: IsoDateTimeSchema,
+  updatedAt: IsoDateTimeSchema,
+});
+export type SiteResponse = z.infer<typeof SiteResponseSchema>;
+
+export const SiteListResponseSchema = z.object({ items: z.array(SiteResponseSchema) });
+export type SiteListResponse = z.infer<typeof SiteListResponseSchema>;
