@@ -11,9 +11,9 @@ export const EnvSchema = z.object({
   PORT: port(3000),
   HOST: z.string().min(1).default('127.0.0.1'),
   DATABASE_HOST: z.string().min(1).default('127.0.0.1'),
-  DATABASE_PORT: port(5433),
+  DATABASE_PORT: port(54329),
   DATABASE_USER: z.string().min(1).default('beamwright'),
-  DATABASE_PASSWORD: z.string().default('beamwright'),
+  DATABASE_PASSWORD: z.string().default('beamwright-local'),
   DATABASE_NAME: z.string().min(1).default('beamwright'),
   /** HMAC secret of the access tokens; at least 16 characters so a placeholder cannot slip through */
   JWT_SECRET: z.string().min(16, 'must be at least 16 characters'),

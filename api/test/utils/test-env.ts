@@ -13,9 +13,9 @@ export function applyTestEnv(): void {
 export function databaseSettingsFromEnv() {
   return {
     host: process.env.DATABASE_HOST ?? '127.0.0.1',
-    port: Number(process.env.DATABASE_PORT ?? 5433),
+    port: Number(process.env.DATABASE_PORT ?? 54329),
     username: process.env.DATABASE_USER ?? 'beamwright',
-    password: process.env.DATABASE_PASSWORD ?? 'beamwright',
+    password: process.env.DATABASE_PASSWORD ?? 'beamwright-local',
     database: process.env.DATABASE_NAME ?? 'beamwright',
   };
 }

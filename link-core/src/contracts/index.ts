@@ -8,3 +8,6 @@ export * from './auth.contract.js';
 export * from './health.contract.js';
 export * from './common.contract.js';
 export * from './sites.contract.js';
+export * from './equipment.contract.js';
+export * from './links.contract.js';
+export * from './reviews.contract.js';
