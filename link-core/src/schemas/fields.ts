@@ -22,6 +22,11 @@ export function finiteNumber() {
 interface Bounds {
   /** exclusive lower bound */
   greaterThan?: number;
+  /**
+   * smallest meaningful value, checked after `greaterThan` (which then stops the checks): a zero
+   * reads "must be greater than 0", a tiny positive value "must be at least 1 mm"
+   */
+  practicalMinimum?: { value: number; text: string };
   /** inclusive lower bound */
   atLeast?: number;
   /** exclusive upper bound */
@@ -38,7 +43,10 @@ export function boundedNumber(bounds: Bounds) {
   const lowerText = (value: number) => bounds.unitNote?.lower ?? String(value);
   const upperText = (value: number) => bounds.unitNote?.upper ?? String(value);
   if (bounds.greaterThan !== undefined) {
-    schema = schema.gt(bounds.greaterThan, `must be greater than ${lowerText(bounds.greaterThan)}`);
+    schema = schema.gt(bounds.greaterThan, { message: `must be greater than ${lowerText(bounds.greaterThan)}`, abort: true });
+  }
+  if (bounds.practicalMinimum !== undefined) {
+    schema = schema.gte(bounds.practicalMinimum.value, `must be at least ${bounds.practicalMinimum.text}`);
   }
   if (bounds.atLeast !== undefined) {
     schema = schema.gte(bounds.atLeast, `must be at least ${lowerText(bounds.atLeast)}`);

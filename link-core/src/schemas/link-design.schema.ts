@@ -51,7 +51,7 @@ export const TransmitterSchema = section({
   /** average optical output power [dBm] (−40 dBm = 0.1 µW … 50 dBm = 100 W) */
   powerDbm: boundedNumber({ atLeast: -40, atMost: 50, unitNote: { lower: '−40 dBm', upper: '50 dBm (100 W)' } }),
   /** 1/e² beam radius at the transmit aperture [m] (W0 of DOMAIN §1.3) */
-  waistRadiusM: boundedNumber({ greaterThan: 0, atMost: 1, unitNote: { upper: '1 m' } }),
+  waistRadiusM: boundedNumber({ greaterThan: 0, practicalMinimum: { value: 1e-4, text: '0.1 mm' }, atMost: 1, unitNote: { upper: '1 m' } }),
   /**
    * measured far-field half-angle divergence, 1/e² [rad]. When it exceeds the diffraction limit
    * M²λ/(πW0) the beam is the defocused launch of DOMAIN §1.3; otherwise it is collimated.
@@ -65,7 +65,7 @@ export const TransmitterSchema = section({
 
 export const ReceiverSchema = section({
   /** clear receive aperture diameter [m] */
-  apertureDiameterM: boundedNumber({ greaterThan: 0, atMost: 2, unitNote: { upper: '2 m' } }),
+  apertureDiameterM: boundedNumber({ greaterThan: 0, practicalMinimum: { value: 1e-3, text: '1 mm' }, atMost: 2, unitNote: { upper: '2 m' } }),
   /** minimum mean optical power for the target BER at the receiver's reference plane [dBm] */
   sensitivityDbm: boundedNumber({ atLeast: -90, atMost: 20, unitNote: { lower: '−90 dBm', upper: '20 dBm' } }),
   /** receive optics and window loss [dB] */
@@ -91,7 +91,7 @@ export const PointingSchema = section({
 export const AtmosphereSchema = section({
   model: z.enum(ATMOSPHERE_MODELS, { error: `must be one of ${ATMOSPHERE_MODELS.join(', ')}` }).default(LINK_DESIGN_DEFAULTS.atmosphereModel),
   /** visibility [m], in the definition given by visibilityDefinition */
-  visibilityM: boundedNumber({ greaterThan: 0, atMost: 1e6, unitNote: { upper: '1000 km' } }),
+  visibilityM: boundedNumber({ greaterThan: 0, practicalMinimum: { value: 1, text: '1 m' }, atMost: 1e6, unitNote: { upper: '1000 km' } }),
   visibilityDefinition: z
     .enum(VISIBILITY_DEFINITIONS, { error: `must be one of ${VISIBILITY_DEFINITIONS.join(', ')}` })
     .default(LINK_DESIGN_DEFAULTS.visibilityDefinition),
@@ -108,7 +108,7 @@ export const ScintillationSchema = section({
 
 export const LinkDesignSchema = section({
   /** path length between the terminals [m] */
-  rangeM: boundedNumber({ greaterThan: 0, atMost: 100_000, unitNote: { upper: '100 km' } }),
+  rangeM: boundedNumber({ greaterThan: 0, practicalMinimum: { value: 1, text: '1 m' }, atMost: 100_000, unitNote: { upper: '100 km' } }),
   transmitter: TransmitterSchema,
   receiver: ReceiverSchema,
   pointing: PointingSchema,
