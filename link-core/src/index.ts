@@ -31,3 +31,19 @@ export { LinkBudgetSchema, BudgetTermSchema, BudgetCheckSchema, BUDGET_TERM_KEYS
 export type { LinkBudget, BudgetTerm, BudgetCheck, BudgetTermKey } from './schemas/link-budget.schema.js';
 export { formatZodIssues } from './schemas/format-zod-issues.js';
 export type { FieldIssue } from './schemas/format-zod-issues.js';
+
+// Link budget (DOMAIN §8–§10)
+export { evaluateLink, linkMarginAtRangeDb } from './budget/evaluate-link.js';
+export { maxRange, maxRangeM, MAX_RANGE_SEARCH_M } from './budget/max-range.js';
+export type { MaxRangeResult } from './budget/max-range.js';
+export { availabilityFromClimatology, availabilityFromRecords, clearAirMarginDb } from './budget/availability.js';
+export type {
+  AvailabilityOptions,
+  ClimatologyAvailability,
+  RecordsAvailability,
+  RecordsAvailabilityOptions,
+  VisibilityClimatology,
+  VisibilityRecords,
+} from './budget/availability.js';
+export { beamEnvelope, marginVsRange, marginVsVisibility } from './budget/samplers.js';
+export type { BeamEnvelope, BeamEnvelopeOptions, RangeSweep, RangeSweepOptions, VisibilitySweep, VisibilitySweepOptions } from './budget/samplers.js';

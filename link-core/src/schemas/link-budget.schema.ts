@@ -63,7 +63,7 @@ export const LinkBudgetSchema = z.object({
   rayleighRangeM: finiteNumber(),
   /** 1/e² beam radius at the receiver W(L) [m] */
   beamRadiusAtReceiverM: finiteNumber(),
-  /** fraction of the beam power inside the (annular) receive aperture, centred, in (0, 1] */
+  /** fraction of the beam power inside the (annular) receive aperture, centred, in [0, 1] (0 only by underflow, when the obscuration blocks the beam) */
   captureFraction: finiteNumber(),
   /** geometric (capture) loss, positive [dB] */
   geometricLossDb: finiteNumber(),

@@ -1,0 +1,74 @@
+/**
+ * Labels, methods and sources of the budget terms. Kept apart from the arithmetic so that the hot
+ * path only copies references to these constant strings.
+ */
+import type { BudgetTermKey } from '../schemas/link-budget.schema.js';
+
+export interface TermDescription {
+  label: string;
+  unit: 'dB' | 'dBm';
+  method: string;
+  source: string;
+}
+
+const ANDREWS_PHILLIPS = 'Andrews L.C., Phillips R.L., "Laser Beam Propagation through Random Media", 2nd ed., SPIE Press (2005)';
+
+export const TERM_DESCRIPTIONS: Record<BudgetTermKey, TermDescription> = {
+  transmitPower: {
+    label: 'Transmit power',
+    unit: 'dBm',
+    method: 'Mean optical output power of the transmitter, as entered',
+    source: 'Terminal datasheet (user input)',
+  },
+  transmitOptics: {
+    label: 'Transmit optics and window',
+    unit: 'dB',
+    method: 'Loss of the transmit optics and window, as entered',
+    source: 'Terminal datasheet (user input); 1–3 dB per terminal is common practice',
+  },
+  geometricSpread: {
+    label: 'Geometric spread (beam wider than the receive aperture)',
+    unit: 'dB',
+    method:
+      'Centred Gaussian capture η = exp(−2b²/W²) − exp(−2a²/W²) with W(L) of the launched beam: W² = W0²(1 + L/|F0|)² + (θd·L)², F0 = −W0/√(θ² − θd²), θd = M²λ/(πW0); collimated when θ ≤ θd',
+    source: `Kogelnik H., Li T., Appl. Opt. 5(10), 1550–1567 (1966); ${ANDREWS_PHILLIPS}, ch. 4 (beam parameters Θ0, Λ0)`,
+  },
+  atmosphericAttenuation: {
+    label: 'Atmospheric attenuation (visibility)',
+    unit: 'dB',
+    method: 'γ = 4.343·(3.91/V)·(λ/550 nm)^(−q(V)) dB/km over the path; visibility given as MOR (5 %) is first converted to the 2 % visibility, V2 = 1.306·MOR',
+    source:
+      'Kim I.I., McArthur B., Korevaar E., Proc. SPIE 4214, 26–37 (2001) (q of the Kim model); Kruse P.W. et al., "Elements of Infrared Technology", Wiley (1962) (q of the Kruse model); Koschmieder (1924) and WMO-No. 8 for the 2 %/5 % thresholds',
+  },
+  pointingLoss: {
+    label: 'Pointing error (mean)',
+    unit: 'dB',
+    method: 'Mean loss of a small receiver under a Rician radial error: E[exp(−2R²/W²)] = exp(−2ν²/(W² + 4σ²))/(1 + 4σ²/W²), ν = bias·L, σ = jitter·L per axis',
+    source: 'Closed form of the Gaussian average over a Rician offset (derived; checked by quadrature); model of Farid A.A., Hranilovic S., J. Lightwave Technol. 25(7), 1702–1710 (2007)',
+  },
+  receiveOptics: {
+    label: 'Receive optics and window',
+    unit: 'dB',
+    method: 'Loss of the receive optics and window, as entered',
+    source: 'Terminal datasheet (user input); 1–3 dB per terminal is common practice',
+  },
+  receiverSensitivity: {
+    label: 'Receiver sensitivity (power above the minimum)',
+    unit: 'dBm',
+    method: 'Minus the sensitivity S: the received power above S is P_rx − S',
+    source: 'Terminal datasheet at the link\'s BER target (user input)',
+  },
+  scintillationFade: {
+    label: 'Scintillation fade margin',
+    unit: 'dB',
+    method:
+      'F = −10·log10(I_T/⟨I⟩) with P(I < I_T) = p under a gamma-gamma irradiance; α, β from the aperture-averaged spherical-wave log variances with β0² = 0.50·Cn²·k^(7/6)·L^(11/6) and d² = kD²/(4L); log-normal when α, β > 500. An estimate (±2 dB)',
+    source: `Al-Habash M.A., Andrews L.C., Phillips R.L., Opt. Eng. 40(8), 1554–1562 (2001); ${ANDREWS_PHILLIPS}, ch. 8–11`,
+  },
+  systemAllowance: {
+    label: 'System allowance (ageing, window dirt)',
+    unit: 'dB',
+    method: 'Allowance entered by the engineer',
+    source: 'Common practice: 1–3 dB for window dirt and ageing',
+  },
+};

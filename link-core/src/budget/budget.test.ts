@@ -1,0 +1,248 @@
+import { describe, expect, it } from 'vitest';
+import { LinkDesignSchema, type LinkDesignInput } from '../schemas/link-design.schema.js';
+import { LinkBudgetSchema } from '../schemas/link-budget.schema.js';
+import { availabilityFromClimatology, availabilityFromRecords, clearAirMarginDb } from './availability.js';
+import { evaluateLink, linkMarginAtRangeDb } from './evaluate-link.js';
+import { maxRange, maxRangeM } from './max-range.js';
+import { beamEnvelope, marginVsRange, marginVsVisibility } from './samplers.js';
+
+// LB-01 of the reference set (DOMAIN §8); the full check against the published chain is in
+// test/reference.test.ts. Here: structure, defaults and consistency between the routines.
+const lb01: LinkDesignInput = {
+  rangeM: 2000,
+  transmitter: { wavelengthM: 1.55e-6, powerDbm: 20, waistRadiusM: 0.025, halfAngleDivergenceRad: 1e-3, opticsLossDb: 1 },
+  receiver: { apertureDiameterM: 0.1, sensitivityDbm: -36, opticsLossDb: 1.5 },
+  pointing: { jitterSigmaPerAxisRad: 50e-6, staticErrorRad: 100e-6 },
+  atmosphere: { model: 'kim', visibilityM: 5000, cn2: 5e-14 },
+  scintillation: { include: true, probability: 1e-3 },
+};
+
+function variant(change: (design: LinkDesignInput) => void): LinkDesignInput {
+  const copy = structuredClone(lb01);
+  change(copy);
+  return copy;
+}
+
+describe('evaluateLink', () => {
+  const budget = evaluateLink(lb01);
+
+  it('gives the LB-01 margin (12.33 dB, DOMAIN §8)', () => {
+    expect(budget.linkMarginDb).toBeCloseTo(12.3323, 4);
+    expect(budget.receivedPowerDbm).toBeCloseTo(-13.8523, 4);
+  });
+
+  it('returns a budget that satisfies its own schema', () => {
+    expect(LinkBudgetSchema.safeParse(budget).success).toBe(true);
+  });
+
+  it('lists the terms in budget order and they sum to the margin and the received power', () => {
+    expect(budget.terms.map((term) => term.key)).toEqual([
+      'transmitPower',
+      'transmitOptics',
+      'geometricSpread',
+      'atmosphericAttenuation',
+      'pointingLoss',
+      'receiveOptics',
+      'receiverSensitivity',
+      'scintillationFade',
+      'systemAllowance',
+    ]);
+    const sum = budget.terms.reduce((total, term) => total + term.valueDb, 0);
+    expect(sum).toBeCloseTo(budget.linkMarginDb, 12);
+    const untilReceiver = budget.terms.slice(0, 6).reduce((total, term) => total + term.valueDb, 0);
+    expect(untilReceiver).toBeCloseTo(budget.receivedPowerDbm, 12);
+    for (const term of budget.terms) {
+      expect(term.method.length).toBeGreaterThan(10);
+      expect(term.source.length).toBeGreaterThan(10);
+    }
+  });
+
+  it('applies the schema defaults itself: a raw minimal design equals the parsed one', () => {
+    const { scintillation: _scintillation, ...minimal } = lb01;
+    const raw = evaluateLink(minimal);
+    const parsed = evaluateLink(LinkDesignSchema.parse(minimal));
+    expect(raw).toEqual(parsed);
+    expect(raw.linkMarginDb).toBeCloseTo(budget.linkMarginDb, 12);
+  });
+
+  it('subtracts the system allowance from the margin only', () => {
+    const withAllowance = evaluateLink(variant((design) => (design.systemMarginDb = 2)));
+    expect(withAllowance.linkMarginDb).toBeCloseTo(budget.linkMarginDb - 2, 12);
+    expect(withAllowance.receivedPowerDbm).toBe(budget.receivedPowerDbm);
+  });
+
+  it('drops the fade margin when scintillation is off or Cn² is 0', () => {
+    const off = evaluateLink(variant((design) => (design.scintillation = { include: false, probability: 1e-3 })));
+    const calm = evaluateLink(variant((design) => (design.atmosphere.cn2 = 0)));
+    expect(off.scintillationFadeMarginDb).toBe(0);
+    expect(calm.scintillationFadeMarginDb).toBe(0);
+    expect(off.linkMarginDb).toBeCloseTo(budget.linkMarginDb + budget.scintillationFadeMarginDb, 12);
+  });
+
+  it('converts a MOR visibility to the 2 % visibility before the model (DOMAIN §5.1)', () => {
+    const mor = evaluateLink(variant((design) => (design.atmosphere = { ...design.atmosphere, visibilityM: 5000 / 1.305865361, visibilityDefinition: 'mor-5-percent' })));
+    expect(mor.atmosphericLossDb).toBeCloseTo(budget.atmosphericLossDb, 6);
+    expect(mor.checks.map((check) => check.key)).toContain('visibility-converted-from-mor');
+  });
+
+  it('models a beam without divergence, or below the diffraction limit, as collimated', () => {
+    const collimated = evaluateLink(variant((design) => delete design.transmitter.halfAngleDivergenceRad));
+    // w(L) = w0·sqrt(1 + (L/z_R)²), z_R = πw0²/λ (Kogelnik & Li 1966)
+    const rayleigh = (Math.PI * 0.025 ** 2) / 1.55e-6;
+    expect(collimated.beamModel).toBe('collimated');
+    expect(collimated.rayleighRangeM).toBeCloseTo(rayleigh, 6);
+    expect(collimated.beamRadiusAtReceiverM).toBeCloseTo(0.025 * Math.sqrt(1 + (2000 / rayleigh) ** 2), 12);
+    const belowLimit = evaluateLink(variant((design) => (design.transmitter.halfAngleDivergenceRad = 1e-5)));
+    expect(belowLimit.beamRadiusAtReceiverM).toBe(collimated.beamRadiusAtReceiverM);
+    expect(belowLimit.checks.map((check) => check.key)).toContain('divergence-below-diffraction-limit');
+  });
+
+  it('loses the obscured part of the aperture', () => {
+    const obscured = evaluateLink(variant((design) => (design.receiver.obscurationRatio = 0.3)));
+    // a ≪ W: the captured power scales with the open area, 1 − 0.3² = 0.91
+    expect(obscured.geometricLossDb - budget.geometricLossDb).toBeCloseTo(-10 * Math.log10(0.91), 3);
+  });
+
+  it('warns when the received power exceeds the overload level', () => {
+    const short = evaluateLink(variant((design) => {
+      design.rangeM = 100;
+      design.receiver.overloadDbm = -10;
+    }));
+    expect(short.receivedPowerDbm).toBeGreaterThan(-10);
+    expect(short.checks.find((check) => check.key === 'receiver-overload')?.severity).toBe('warning');
+  });
+
+  it('warns when the field of view is narrower than the turbulence blur', () => {
+    const narrow = evaluateLink(variant((design) => (design.receiver.fieldOfViewRad = 1e-6)));
+    expect(narrow.checks.map((check) => check.key)).toContain('field-of-view-below-turbulence-blur');
+    const wide = evaluateLink(variant((design) => (design.receiver.fieldOfViewRad = 5e-3)));
+    expect(wide.checks.map((check) => check.key)).not.toContain('field-of-view-below-turbulence-blur');
+  });
+
+  it('gives the same margin through linkMarginAtRangeDb', () => {
+    expect(linkMarginAtRangeDb(lb01, 2000)).toBeCloseTo(budget.linkMarginDb, 12);
+  });
+});
+
+describe('maxRangeM', () => {
+  it('finds the range where the margin equals the requirement', () => {
+    const rangeM = maxRangeM(lb01, 3)!;
+    expect(linkMarginAtRangeDb(lb01, rangeM)).toBeCloseTo(3, 6);
+  });
+
+  it('returns null when even 50 m does not give the margin', () => {
+    expect(maxRangeM(lb01, 200)).toBeNull();
+    expect(maxRange(lb01, 200).status).toBe('not-achievable');
+  });
+
+  it('caps at 50 km and says so', () => {
+    const result = maxRange(lb01, -500);
+    expect(result).toMatchObject({ status: 'beyond-search-limit', rangeM: 50_000 });
+    expect(maxRangeM(lb01, -500)).toBe(50_000);
+  });
+
+  it('rejects a non-finite requirement', () => {
+    expect(() => maxRangeM(lb01, Number.NaN)).toThrow(/requiredMarginDb/);
+  });
+});
+
+describe('availability', () => {
+  const oneKm = variant((design) => {
+    design.rangeM = 1000;
+    design.scintillation = { include: false, probability: 1e-3 };
+  });
+  // Synthetic climatology of the reference case LB-03 (not real data).
+  const climatology = {
+    visibilityM: [50, 100, 200, 500, 1000, 2000, 5000, 10000],
+    probabilityBelow: [0.0005, 0.001, 0.002, 0.005, 0.01, 0.03, 0.1, 0.3],
+  };
+
+  it('matches LB-03: V_min 540 m, availability 99.46 %', () => {
+    const result = availabilityFromClimatology(oneKm, climatology);
+    expect(result.minimumVisibilityM).toBeCloseTo(540.317, 2);
+    expect(result.availabilityPercent).toBeCloseTo(99.4597, 3);
+    expect(result.lookup).toBe('interpolated');
+  });
+
+  it('reads a MOR climatology at V_min/1.306', () => {
+    const twoPercent = availabilityFromClimatology(oneKm, climatology);
+    const mor = availabilityFromClimatology(oneKm, { ...climatology, visibilityDefinition: 'mor-5-percent' });
+    expect(mor.minimumVisibilityM! * 1.305865361).toBeCloseTo(twoPercent.minimumVisibilityM!, 4);
+  });
+
+  it('reports a link that never closes', () => {
+    const result = availabilityFromClimatology(oneKm, climatology, { requiredMarginDb: 100 });
+    expect(result).toMatchObject({ availability: 0, minimumVisibilityM: null, lookup: 'always-down' });
+  });
+
+  it('rejects malformed tables with the field', () => {
+    expect(() => availabilityFromClimatology(oneKm, { visibilityM: [100, 50], probabilityBelow: [0.1, 0.2] })).toThrow(/visibilityM\.1/);
+    expect(() => availabilityFromClimatology(oneKm, { visibilityM: [50, 100], probabilityBelow: [0.2, 1.5] })).toThrow(/probabilityBelow\.1/);
+  });
+
+  it('counts hourly records below V_min as down, and agrees with the clear-air margin', () => {
+    const vMin = availabilityFromClimatology(oneKm, climatology).minimumVisibilityM!;
+    const visibilityM = [10_000, vMin * 0.9, vMin * 0.8, 20_000, Number.NaN, vMin * 0.5, vMin * 1.1, 300];
+    const result = availabilityFromRecords(oneKm, { visibilityM });
+    expect(result).toMatchObject({ recordCount: 8, usableCount: 7, missingCount: 1, unavailableHours: 4, availableHours: 3, outageCount: 3, longestOutageH: 2 });
+    expect(result.availability).toBeCloseTo(3 / 7, 12);
+    expect(result.clearAirMarginDb).toBeCloseTo(clearAirMarginDb(oneKm), 12);
+    expect(result.worstMarginDb).toBeLessThan(0);
+  });
+
+  it('weights time-stamped records by their interval and treats long gaps as missing time', () => {
+    const hour = 3_600_000;
+    const result = availabilityFromRecords(oneKm, {
+      visibilityM: [100, 100, 20_000, 20_000],
+      timestampsMs: [0, 0.5 * hour, 1 * hour, 11 * hour],
+    });
+    // 0.5 h down, 0.5 h down, then 1 h up before a 10 h gap (counted as one nominal hour), 1 h up
+    expect(result.unavailableHours).toBeCloseTo(1, 12);
+    expect(result.coveredHours).toBeCloseTo(3, 12);
+    expect(result.outageCount).toBe(1);
+    expect(result.longestOutageH).toBeCloseTo(1, 12);
+    expect(() => availabilityFromRecords(oneKm, { visibilityM: [1, 2], timestampsMs: [5, 5] })).toThrow(/timestampsMs\.1/);
+  });
+});
+
+describe('chart samplers', () => {
+  const budget = evaluateLink(lb01);
+
+  it('marginVsRange passes through the design point and falls with range', () => {
+    const sweep = marginVsRange(lb01, { fromM: 1000, toM: 3000, points: 5 });
+    expect(sweep.rangeM).toEqual([1000, 1500, 2000, 2500, 3000]);
+    expect(sweep.linkMarginDb[2]).toBeCloseTo(budget.linkMarginDb, 12);
+    for (let i = 1; i < 5; i++) expect(sweep.linkMarginDb[i]!).toBeLessThan(sweep.linkMarginDb[i - 1]!);
+  });
+
+  it('marginVsVisibility passes through the design visibility and rises with it', () => {
+    const sweep = marginVsVisibility(lb01, { fromM: 500, toM: 50_000, points: 3 });
+    expect(sweep.visibilityM[1]).toBeCloseTo(5000, 9);
+    expect(sweep.linkMarginDb[1]).toBeCloseTo(budget.linkMarginDb, 9);
+    expect(sweep.linkMarginDb[0]!).toBeLessThan(sweep.linkMarginDb[2]!);
+  });
+
+  it('beamEnvelope ends at the budget beam radius and starts at W0', () => {
+    const envelope = beamEnvelope(lb01, { points: 11 });
+    expect(envelope.beamRadiusM[0]).toBeCloseTo(0.025, 12);
+    expect(envelope.beamRadiusM[10]).toBeCloseTo(budget.beamRadiusAtReceiverM, 9);
+    expect(envelope.beamModel).toBe('defocused');
+    expect(envelope.waistPositionM).toBeLessThan(0);
+    expect(envelope.rayleighRangeEndWithinPath).toBe(false);
+  });
+
+  it('marks the Rayleigh range of a collimated beam at πW0²/(M²λ) from the aperture', () => {
+    const design = variant((d) => {
+      delete d.transmitter.halfAngleDivergenceRad;
+      d.transmitter.m2 = 1.2;
+    });
+    const envelope = beamEnvelope(design);
+    const rayleigh = (Math.PI * 0.025 ** 2) / (1.2 * 1.55e-6);
+    expect(envelope.rayleighRangeEndM).toBeCloseTo(rayleigh, 6);
+    expect(envelope.rayleighRangeEndWithinPath).toBe(true);
+  });
+
+  it('rejects a bad sample count', () => {
+    expect(() => marginVsRange(lb01, { points: 1 })).toThrow(/points/);
+  });
+});

@@ -1,0 +1,133 @@
+/**
+ * The link budget of DOMAIN §8 as an ordered list of terms, and the maximum range for a required
+ * margin (DOMAIN §9).
+ */
+import { coherenceRadiusM } from '../turbulence/rytov.js';
+import type { BudgetCheck, BudgetTerm, BudgetTermKey, LinkBudget } from '../schemas/link-budget.schema.js';
+import type { LinkDesignInput } from '../schemas/link-design.schema.js';
+import { TERM_DESCRIPTIONS } from './budget-terms.js';
+import { evaluateChain, resolveDesign, specificAttenuationDbPerKm, type ResolvedDesign } from './link-chain.js';
+
+function term(key: BudgetTermKey, valueDb: number): BudgetTerm {
+  const description = TERM_DESCRIPTIONS[key];
+  return { key, label: description.label, valueDb, unit: description.unit, method: description.method, source: description.source };
+}
+
+/** Diffraction half-angle M²λ/(πW0) [rad]. */
+function diffractionHalfAngle(design: ResolvedDesign): number {
+  return (design.m2 * design.wavelengthM) / (Math.PI * design.apertureBeamRadiusM);
+}
+
+function collectChecks(design: ResolvedDesign, receivedPowerDbm: number, diffractionRad: number): BudgetCheck[] {
+  const checks: BudgetCheck[] = [];
+  if (design.halfAngleDivergenceRad > 0 && design.halfAngleDivergenceRad <= diffractionRad) {
+    checks.push({
+      key: 'divergence-below-diffraction-limit',
+      severity: 'info',
+      message: `The entered divergence is at or below the diffraction limit of this aperture (${(diffractionRad * 1e6).toFixed(1)} µrad half-angle); the beam is modelled as collimated at the aperture.`,
+    });
+  }
+  if (design.overloadDbm !== undefined && receivedPowerDbm > design.overloadDbm) {
+    checks.push({
+      key: 'receiver-overload',
+      severity: 'warning',
+      message: `The mean received power (${receivedPowerDbm.toFixed(1)} dBm) exceeds the receiver overload level (${design.overloadDbm.toFixed(1)} dBm): add attenuation or defocus the beam.`,
+    });
+  }
+  if (design.morInput) {
+    checks.push({
+      key: 'visibility-converted-from-mor',
+      severity: 'info',
+      message: 'Visibility entered as MOR (5 % contrast) was converted to the 2 % visibility (× 1.306) before the attenuation model was applied.',
+    });
+  }
+  if (design.kruse && design.visibility2PercentKm <= 6) {
+    checks.push({
+      key: 'kruse-in-fog',
+      severity: 'info',
+      message: "Below 6 km visibility Kruse's wavelength dependence is not supported by fog measurements (Pierce et al., 2001); Kim's model is preferred.",
+    });
+  }
+  if (design.fieldOfViewRad !== undefined && design.cn2 > 0) {
+    // Turbulence blur of the focused spot ≈ λ/ρ0 (DOMAIN §6.3); the field of view should exceed it.
+    const rho0 = coherenceRadiusM({ cn2: design.cn2, wavelengthM: design.wavelengthM, distanceM: design.rangeM, wave: 'spherical' });
+    const blurRad = design.wavelengthM / rho0;
+    if (blurRad > design.fieldOfViewRad) {
+      checks.push({
+        key: 'field-of-view-below-turbulence-blur',
+        severity: 'warning',
+        message: `The receiver field of view (${(design.fieldOfViewRad * 1e6).toFixed(0)} µrad half-angle) is smaller than the turbulence blur λ/ρ0 ≈ ${(blurRad * 1e6).toFixed(0)} µrad.`,
+      });
+    }
+  }
+  return checks;
+}
+
+/**
+ * Link budget and margin of a design (DOMAIN §8):
+ * P_rx = P_tx − L_tx − L_geo − γ·L − L_point − L_rx [dBm]; M = P_rx − S − F_scint − M_system [dB].
+ *
+ * Accepts a validated design or a raw one with only the required fields: the defaults of
+ * LINK_DESIGN_DEFAULTS are applied here with `??`; nothing is parsed, so callers that take user
+ * input validate with LinkDesignSchema first. Terms are returned in budget order; each term's
+ * `valueDb` is its signed contribution, so the terms sum to `linkMarginDb`.
+ *
+ * @param design the link design (SI units, powers in dBm, losses in dB); see LinkDesignSchema for ranges
+ * @returns the budget: terms, beam radius at the receiver [m], losses [dB], received power [dBm],
+ *   fade margin [dB], link margin [dB] and findings
+ * @see Kim I.I., Korevaar E., Proc. SPIE 4530, 84–95 (2001) (budget structure); each term's source is in its `source`.
+ */
+export function evaluateLink(design: LinkDesignInput): LinkBudget {
+  const resolved = resolveDesign(design);
+  const attenuation = specificAttenuationDbPerKm(resolved, resolved.visibility2PercentKm);
+  const chain = evaluateChain(resolved, resolved.rangeM, attenuation, resolved.includeScintillation);
+  const diffractionRad = diffractionHalfAngle(resolved);
+  const defocused = resolved.halfAngleDivergenceRad > diffractionRad;
+  const terms: BudgetTerm[] = [
+    term('transmitPower', resolved.powerDbm),
+    term('transmitOptics', -resolved.transmitOpticsLossDb),
+    term('geometricSpread', -chain.geometricLossDb),
+    term('atmosphericAttenuation', -chain.atmosphericLossDb),
+    term('pointingLoss', -chain.pointingLossDb),
+    term('receiveOptics', -resolved.receiveOpticsLossDb),
+    term('receiverSensitivity', -resolved.sensitivityDbm),
+    term('scintillationFade', -chain.scintillationFadeMarginDb),
+    term('systemAllowance', -resolved.systemMarginDb),
+  ];
+  return {
+    terms,
+    beamModel: defocused ? 'defocused' : 'collimated',
+    halfAngleDivergenceRad: defocused ? resolved.halfAngleDivergenceRad : diffractionRad,
+    diffractionHalfAngleRad: diffractionRad,
+    rayleighRangeM: resolved.apertureBeamRadiusM / diffractionRad,
+    beamRadiusAtReceiverM: chain.beamRadiusAtReceiverM,
+    captureFraction: chain.captureFraction,
+    geometricLossDb: chain.geometricLossDb,
+    effectiveVisibilityM: resolved.visibility2PercentKm * 1000,
+    specificAttenuationDbPerKm: attenuation,
+    atmosphericLossDb: chain.atmosphericLossDb,
+    pointingLossDb: chain.pointingLossDb,
+    receivedPowerDbm: chain.receivedPowerDbm,
+    rytovVarianceSpherical: chain.rytovVarianceSpherical,
+    scintillationIndex: chain.scintillationIndex,
+    scintillationFadeMarginDb: chain.scintillationFadeMarginDb,
+    systemMarginDb: resolved.systemMarginDb,
+    linkMarginDb: chain.linkMarginDb,
+    checks: collectChecks(resolved, chain.receivedPowerDbm, diffractionRad),
+  };
+}
+
+/**
+ * Link margin of a design at another range, everything else unchanged (cheaper than evaluateLink:
+ * no terms, no findings).
+ *
+ * @param design the link design
+ * @param rangeM path length [m], > 0
+ * @returns link margin [dB]
+ * @see evaluateLink
+ */
+export function linkMarginAtRangeDb(design: LinkDesignInput, rangeM: number): number {
+  const resolved = resolveDesign(design);
+  const attenuation = specificAttenuationDbPerKm(resolved, resolved.visibility2PercentKm);
+  return evaluateChain(resolved, rangeM, attenuation, resolved.includeScintillation).linkMarginDb;
+}

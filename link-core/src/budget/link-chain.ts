@@ -1,0 +1,160 @@
+/**
+ * The arithmetic of the link budget (DOMAIN §8), allocation-light and without validation, shared by
+ * evaluateLink, maxRangeM, the availability routines and the chart samplers. A design is first
+ * resolved into plain numbers (defaults applied with `??`, no zod parse), then the chain is
+ * evaluated for any range and specific attenuation.
+ */
+import { VISIBILITY_2_PERCENT_PER_MOR, visibilityExtinctionPerKmFast } from '../atmosphere/visibility-attenuation.js';
+import { launchBeamRadiusAtRangeM } from '../beam/launch.js';
+import { meanPointingLossDb } from '../pointing/pointing.js';
+import { LINK_DESIGN_DEFAULTS, type LinkDesignInput } from '../schemas/link-design.schema.js';
+import { apertureAveragedFadeMarginDb, apertureAveragedScintillationIndexFast } from '../turbulence/scintillation.js';
+import { rytovVarianceFast } from '../turbulence/rytov.js';
+
+const DB_PER_NEPER_POWER = 10 / Math.LN10;
+
+/** A design reduced to the numbers the chain needs, defaults applied. */
+export interface ResolvedDesign {
+  rangeM: number;
+  wavelengthM: number;
+  powerDbm: number;
+  apertureBeamRadiusM: number;
+  /** datasheet half-angle [rad]; 0 when absent (collimated) */
+  halfAngleDivergenceRad: number;
+  m2: number;
+  transmitOpticsLossDb: number;
+  apertureDiameterM: number;
+  obscurationRatio: number;
+  sensitivityDbm: number;
+  receiveOpticsLossDb: number;
+  overloadDbm: number | undefined;
+  fieldOfViewRad: number | undefined;
+  jitterSigmaPerAxisRad: number;
+  staticErrorRad: number;
+  kruse: boolean;
+  /** 2 % contrast visibility [km] after any MOR conversion */
+  visibility2PercentKm: number;
+  morInput: boolean;
+  cn2: number;
+  includeScintillation: boolean;
+  fadeProbability: number;
+  systemMarginDb: number;
+}
+
+/** Applies the schema defaults with `??` (the hot path never parses). */
+export function resolveDesign(design: LinkDesignInput): ResolvedDesign {
+  const { transmitter, receiver, pointing, atmosphere } = design;
+  const morInput = atmosphere.visibilityDefinition === 'mor-5-percent';
+  const visibilityM = morInput ? atmosphere.visibilityM * VISIBILITY_2_PERCENT_PER_MOR : atmosphere.visibilityM;
+  return {
+    rangeM: design.rangeM,
+    wavelengthM: transmitter.wavelengthM,
+    powerDbm: transmitter.powerDbm,
+    apertureBeamRadiusM: transmitter.waistRadiusM,
+    halfAngleDivergenceRad: transmitter.halfAngleDivergenceRad ?? 0,
+    m2: transmitter.m2 ?? LINK_DESIGN_DEFAULTS.m2,
+    transmitOpticsLossDb: transmitter.opticsLossDb,
+    apertureDiameterM: receiver.apertureDiameterM,
+    obscurationRatio: receiver.obscurationRatio ?? LINK_DESIGN_DEFAULTS.obscurationRatio,
+    sensitivityDbm: receiver.sensitivityDbm,
+    receiveOpticsLossDb: receiver.opticsLossDb,
+    overloadDbm: receiver.overloadDbm,
+    fieldOfViewRad: receiver.fieldOfViewRad,
+    jitterSigmaPerAxisRad: pointing.jitterSigmaPerAxisRad,
+    staticErrorRad: pointing.staticErrorRad,
+    kruse: (atmosphere.model ?? LINK_DESIGN_DEFAULTS.atmosphereModel) === 'kruse',
+    visibility2PercentKm: visibilityM / 1000,
+    morInput,
+    cn2: atmosphere.cn2,
+    includeScintillation: design.scintillation?.include ?? LINK_DESIGN_DEFAULTS.scintillationInclude,
+    fadeProbability: design.scintillation?.probability ?? LINK_DESIGN_DEFAULTS.scintillationProbability,
+    systemMarginDb: design.systemMarginDb ?? LINK_DESIGN_DEFAULTS.systemMarginDb,
+  };
+}
+
+/**
+ * Specific attenuation of the resolved design at a 2 % visibility.
+ * @param design resolved design (model and wavelength)
+ * @param visibility2PercentKm 2 % visibility [km], > 0
+ * @returns γ [dB/km]
+ * @see Kim, McArthur & Korevaar, Proc. SPIE 4214 (2001); Kruse et al. (1962).
+ */
+export function specificAttenuationDbPerKm(design: ResolvedDesign, visibility2PercentKm: number): number {
+  return DB_PER_NEPER_POWER * visibilityExtinctionPerKmFast(design.kruse, visibility2PercentKm, design.wavelengthM);
+}
+
+/**
+ * Geometric loss of a centred Gaussian beam on a circular aperture of radius a with a central
+ * obscuration of radius b: −10·log10[exp(−2b²/w²) − exp(−2a²/w²)], evaluated in the log domain as
+ * 4.343·2b²/w² − 10·log10(1 − exp(−2(a² − b²)/w²)). It stays finite and accurate where the plain
+ * difference cancels or underflows (a beam much smaller than the obscuration is blocked, not lost
+ * to NaN).
+ *
+ * @param beamRadiusM 1/e² beam radius w [m], > 0
+ * @param apertureRadiusM a [m], > b
+ * @param obscurationRadiusM b [m], ≥ 0
+ * @returns loss [dB], ≥ 0
+ * @see Siegman A.E., "Lasers" (1986), §17.1 (encircled power of a TEM00 beam).
+ */
+export function centredGeometricLossDb(beamRadiusM: number, apertureRadiusM: number, obscurationRadiusM: number): number {
+  const inverseSquare = 2 / (beamRadiusM * beamRadiusM);
+  const openFraction = -Math.expm1(-inverseSquare * (apertureRadiusM - obscurationRadiusM) * (apertureRadiusM + obscurationRadiusM));
+  return DB_PER_NEPER_POWER * inverseSquare * obscurationRadiusM * obscurationRadiusM - 10 * Math.log10(openFraction);
+}
+
+/** Numbers of one evaluation of the chain (all losses positive, in dB). */
+export interface ChainResult {
+  beamRadiusAtReceiverM: number;
+  captureFraction: number;
+  geometricLossDb: number;
+  atmosphericLossDb: number;
+  pointingLossDb: number;
+  receivedPowerDbm: number;
+  rytovVarianceSpherical: number;
+  scintillationIndex: number;
+  scintillationFadeMarginDb: number;
+  linkMarginDb: number;
+}
+
+/**
+ * Evaluates P_rx = P_tx − L_tx − L_geo − γL − L_point − L_rx and M = P_rx − S − F_scint − M_system.
+ *
+ * @param design resolved design
+ * @param rangeM path length [m], > 0
+ * @param attenuationDbPerKm specific atmospheric attenuation γ [dB/km], ≥ 0
+ * @param includeScintillation whether to subtract the fade margin
+ * @returns the chain's numbers
+ * @see DOMAIN §8; the sources of each term are in budget-terms.ts.
+ */
+export function evaluateChain(design: ResolvedDesign, rangeM: number, attenuationDbPerKm: number, includeScintillation: boolean): ChainResult {
+  const beamRadiusM = launchBeamRadiusAtRangeM(design.wavelengthM, design.apertureBeamRadiusM, design.halfAngleDivergenceRad, design.m2, rangeM);
+  const apertureRadiusM = design.apertureDiameterM / 2;
+  const geometricLossDb = centredGeometricLossDb(beamRadiusM, apertureRadiusM, apertureRadiusM * design.obscurationRatio);
+  const captureFraction = Math.pow(10, -geometricLossDb / 10);
+  const atmosphericLossDb = (attenuationDbPerKm * rangeM) / 1000;
+  const pointingLossDb = meanPointingLossDb(beamRadiusM, design.jitterSigmaPerAxisRad * rangeM, design.staticErrorRad * rangeM);
+  const receivedPowerDbm =
+    design.powerDbm - design.transmitOpticsLossDb - geometricLossDb - atmosphericLossDb - pointingLossDb - design.receiveOpticsLossDb;
+  let rytovVarianceSpherical = 0;
+  let scintillationIndex = 0;
+  let scintillationFadeMarginDb = 0;
+  if (includeScintillation && design.cn2 > 0) {
+    // Spherical wave, aperture averaged, gamma-gamma at p (DOMAIN §6.2, §6.5, §6.7): divergent FSO
+    // beams have Θ ≈ 0 at the receiver and behave as spherical waves.
+    rytovVarianceSpherical = rytovVarianceFast(design.cn2, design.wavelengthM, rangeM, true);
+    scintillationIndex = apertureAveragedScintillationIndexFast(design.wavelengthM, rangeM, design.cn2, design.apertureDiameterM);
+    scintillationFadeMarginDb = apertureAveragedFadeMarginDb(design.wavelengthM, rangeM, design.cn2, design.apertureDiameterM, design.fadeProbability);
+  }
+  return {
+    beamRadiusAtReceiverM: beamRadiusM,
+    captureFraction,
+    geometricLossDb,
+    atmosphericLossDb,
+    pointingLossDb,
+    receivedPowerDbm,
+    rytovVarianceSpherical,
+    scintillationIndex,
+    scintillationFadeMarginDb,
+    linkMarginDb: receivedPowerDbm - design.sensitivityDbm - scintillationFadeMarginDb - design.systemMarginDb,
+  };
+}
