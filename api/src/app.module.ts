@@ -17,6 +17,9 @@ import { HealthModule } from './health/health.module.js';
 import { OrganisationsModule } from './organisations/organisations.module.js';
 import { UsersModule } from './users/users.module.js';
 import { SitesModule } from './sites/sites.module.js';
+import { LinksModule } from './links/links.module.js';
+import { EvaluateModule } from './evaluate/evaluate.module.js';
+import { EquipmentModule } from './equipment/equipment.module.js';
 import { API_PATH_PATTERN, isUiBuilt } from './spa/ui-dist.js';
 
 @Module({
@@ -50,6 +53,9 @@ import { API_PATH_PATTERN, isUiBuilt } from './spa/ui-dist.js';
     AuthModule,
     HealthModule,
     SitesModule,
+    EquipmentModule,
+    LinksModule,
+    EvaluateModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: JwtAuthGuard },

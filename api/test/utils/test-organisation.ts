@@ -23,7 +23,7 @@ export interface TestOrganisation {
   id: string;
   name: string;
   members: Record<Role, TestMember>;
-  /** deletes the organisation; its users and data go with it (ON DELETE CASCADE) */
+  /** deletes the organisation with its users and data */
   remove(): Promise<void>;
 }
 
@@ -48,6 +48,8 @@ export async function createTestOrganisation(app: INestApplication, label: strin
     name: organisation.name,
     members,
     async remove() {
+      // links first (their revisions and reviews go with them), so the users they reference can go
+      await dataSource.query('DELETE FROM link WHERE organisation_id = $1', [organisation.id]);
       await dataSource.getRepository(Organisation).delete(organisation.id);
     },
   };

@@ -1,0 +1,19 @@
+import { describe, expect, it } from 'vitest';
+import { diffDesigns } from './design-diff.js';
+
+describe('diffDesigns', () => {
+  it('lists changed, added and removed leaves by dotted path, sorted', () => {
+    const from = { rangeM: 1000, transmitter: { powerDbm: 10, m2: 1 }, receiver: { overloadDbm: -5 } };
+    const to = { rangeM: 1500, transmitter: { powerDbm: 10, m2: 1.2, halfAngleDivergenceRad: 1e-3 }, receiver: {} };
+    expect(diffDesigns(from, to)).toEqual([
+      { path: 'rangeM', from: 1000, to: 1500 },
+      { path: 'receiver.overloadDbm', from: -5, to: null },
+      { path: 'transmitter.halfAngleDivergenceRad', from: null, to: 1e-3 },
+      { path: 'transmitter.m2', from: 1, to: 1.2 },
+    ]);
+  });
+
+  it('is empty for equal designs, whatever the key order', () => {
+    expect(diffDesigns({ a: 1, b: { c: true } }, { b: { c: true }, a: 1 })).toEqual([]);
+  });
+});

@@ -1,0 +1,45 @@
+import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { LINK_STATUSES, REVIEW_ACTIONS, type LinkStatus, type ReviewAction } from '@beamwright/link-core/contracts';
+import { User } from '../users/user.entity.js';
+import { Link } from './link.entity.js';
+
+/** One step of the review trail (append-only): who did what to which revision, and when. */
+@Entity({ name: 'link_review' })
+@Index(['linkId', 'createdAt'])
+export class LinkReview {
+  @PrimaryGeneratedColumn('uuid')
+  id: string;
+
+  @Column({ name: 'link_id', type: 'uuid' })
+  linkId: string;
+
+  @ManyToOne(() => Link, { onDelete: 'CASCADE' })
+  @JoinColumn({ name: 'link_id' })
+  link?: Link;
+
+  @Column({ name: 'revision_number', type: 'integer' })
+  revisionNumber: number;
+
+  @Column({ type: 'enum', enum: REVIEW_ACTIONS, enumName: 'review_action' })
+  action: ReviewAction;
+
+  // own enum type: TypeORM's generator cannot share one type between tables
+  @Column({ name: 'from_status', type: 'enum', enum: LINK_STATUSES, enumName: 'link_review_status' })
+  fromStatus: LinkStatus;
+
+  @Column({ name: 'to_status', type: 'enum', enum: LINK_STATUSES, enumName: 'link_review_status' })
+  toStatus: LinkStatus;
+
+  @Column({ type: 'text', default: '' })
+  comment: string;
+
+  @Column({ name: 'actor_id', type: 'uuid' })
+  actorId: string;
+
+  @ManyToOne(() => User)
+  @JoinColumn({ name: 'actor_id' })
+  actor?: User;
+
+  @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
+  createdAt: Date;
+}

@@ -1,0 +1,101 @@
+import type {
+  Approval,
+  LinkDetail,
+  LinkSummary,
+  ReviewEntry,
+  Revision,
+  RevisionSummary,
+  SiteRef,
+  UserRef,
+} from '@beamwright/link-core/contracts';
+import type { Site } from '../sites/site.entity.js';
+import type { User } from '../users/user.entity.js';
+import type { LinkReview } from './link-review.entity.js';
+import type { LinkRevision } from './link-revision.entity.js';
+import type { Link } from './link.entity.js';
+
+export function toUserRef(user: User | undefined, fallbackId: string): UserRef {
+  return { id: user?.id ?? fallbackId, displayName: user?.displayName ?? 'Unknown user' };
+}
+
+function toSiteRef(site: Site | null | undefined): SiteRef | null {
+  return site ? { id: site.id, name: site.name } : null;
+}
+
+/** Needs `owner`, `siteA` and `siteB` loaded. */
+export function toLinkSummary(link: Link): LinkSummary {
+  return {
+    id: link.id,
+    name: link.name,
+    status: link.status,
+    revision: link.latestRevision,
+    owner: toUserRef(link.owner, link.ownerId),
+    siteA: toSiteRef(link.siteA),
+    siteB: toSiteRef(link.siteB),
+    linkMarginDb: link.latestLinkMarginDb,
+    receivedPowerDbm: link.latestReceivedPowerDbm,
+    rangeM: link.latestRangeM,
+    wavelengthM: link.latestWavelengthM,
+    createdAt: link.createdAt.toISOString(),
+    updatedAt: link.updatedAt.toISOString(),
+  };
+}
+
+/** Needs the revision's `author` loaded. */
+export function toRevision(revision: LinkRevision, approval: Approval | null): Revision {
+  return {
+    linkId: revision.linkId,
+    revision: revision.revisionNumber,
+    design: revision.design,
+    budget: revision.budget,
+    linkCoreVersion: revision.linkCoreVersion,
+    note: revision.note,
+    author: toUserRef(revision.author, revision.authorId),
+    createdAt: revision.createdAt.toISOString(),
+    approval,
+  };
+}
+
+export function toRevisionSummary(revision: LinkRevision, approval: Approval | null): RevisionSummary {
+  const { design: _design, budget: _budget, ...rest } = toRevision(revision, approval);
+  return {
+    ...rest,
+    linkMarginDb: revision.budget.linkMarginDb,
+    receivedPowerDbm: revision.budget.receivedPowerDbm,
+    rangeM: revision.design.rangeM,
+    wavelengthM: revision.design.transmitter.wavelengthM,
+  };
+}
+
+export function toLinkDetail(link: Link, latest: LinkRevision, approval: Approval | null): LinkDetail {
+  const revision = toRevision(latest, approval);
+  return {
+    ...toLinkSummary(link),
+    design: revision.design,
+    budget: revision.budget,
+    linkCoreVersion: revision.linkCoreVersion,
+    note: revision.note,
+    author: revision.author,
+    revisedAt: revision.createdAt,
+    approval,
+  };
+}
+
+/** Needs `actor` loaded. */
+export function toReviewEntry(review: LinkReview): ReviewEntry {
+  return {
+    id: review.id,
+    linkId: review.linkId,
+    revision: review.revisionNumber,
+    action: review.action,
+    fromStatus: review.fromStatus,
+    toStatus: review.toStatus,
+    comment: review.comment,
+    actor: toUserRef(review.actor, review.actorId),
+    createdAt: review.createdAt.toISOString(),
+  };
+}
+
+export function approvalFrom(review: LinkReview | null | undefined): Approval | null {
+  return review ? { by: toUserRef(review.actor, review.actorId), at: review.createdAt.toISOString() } : null;
+}

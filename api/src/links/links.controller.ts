@@ -1,0 +1,180 @@
+import { Body, Controller, Get, HttpCode, HttpStatus, Param, Patch, Post, Query } from '@nestjs/common';
+import { ApiBearerAuth, ApiBody, ApiConflictResponse, ApiCreatedResponse, ApiOkResponse, ApiQuery, ApiTags } from '@nestjs/swagger';
+import {
+  CreateLinkRequestSchema,
+  CreateRevisionRequestSchema,
+  LinkDetailSchema,
+  LinkListQuerySchema,
+  LinkListResponseSchema,
+  ReturnRevisionRequestSchema,
+  ReviewActionResponseSchema,
+  ReviewCommentRequestSchema,
+  ReviewListResponseSchema,
+  RevisionConflictBodySchema,
+  RevisionDiffQuerySchema,
+  RevisionDiffResponseSchema,
+  RevisionListResponseSchema,
+  RevisionSchema,
+  UpdateLinkRequestSchema,
+  type LinkDetail,
+  type LinkListResponse,
+  type ReviewActionResponse,
+  type ReviewListResponse,
+  type Revision,
+  type RevisionDiffResponse,
+  type RevisionListResponse,
+} from '@beamwright/link-core/contracts';
+import type { z } from 'zod';
+import type { AuthUser } from '../common/auth-user.js';
+import { CurrentUser } from '../common/decorators/current-user.decorator.js';
+import { DESIGN_WRITERS, REVIEWERS, Roles } from '../common/decorators/roles.decorator.js';
+import { openApiSchema } from '../common/openapi/zod-openapi.js';
+import { PositiveIntParamPipe } from '../common/pipes/positive-int-param.pipe.js';
+import { uuidParam } from '../common/pipes/uuid-param.pipe.js';
+import { ZodValidationPipe } from '../common/pipes/zod-validation.pipe.js';
+import { LinksService } from './links.service.js';
+import { ReviewsService } from './reviews.service.js';
+
+const revisionParam = () => new PositiveIntParamPipe('revision');
+
+@ApiTags('links')
+@ApiBearerAuth()
+@Controller('links')
+export class LinksController {
+  constructor(
+    private readonly links: LinksService,
+    private readonly reviews: ReviewsService,
+  ) {}
+
+  @Get()
+  @ApiQuery({ name: 'query', required: false, schema: openApiSchema(LinkListQuerySchema), style: 'form', explode: true })
+  @ApiOkResponse({ schema: openApiSchema(LinkListResponseSchema, 'output') })
+  list(@CurrentUser() caller: AuthUser, @Query(new ZodValidationPipe(LinkListQuerySchema)) query: z.output<typeof LinkListQuerySchema>): Promise<LinkListResponse> {
+    return this.links.list(caller, query);
+  }
+
+  @Post()
+  @Roles(...DESIGN_WRITERS)
+  @ApiBody({ schema: openApiSchema(CreateLinkRequestSchema) })
+  @ApiCreatedResponse({ schema: openApiSchema(LinkDetailSchema, 'output') })
+  create(@CurrentUser() caller: AuthUser, @Body(new ZodValidationPipe(CreateLinkRequestSchema)) body: z.output<typeof CreateLinkRequestSchema>): Promise<LinkDetail> {
+    return this.links.create(caller, body);
+  }
+
+  @Get(':id')
+  @ApiOkResponse({ schema: openApiSchema(LinkDetailSchema, 'output') })
+  get(@CurrentUser() caller: AuthUser, @Param('id', uuidParam()) id: string): Promise<LinkDetail> {
+    return this.links.get(caller, id);
+  }
+
+  @Patch(':id')
+  @Roles(...DESIGN_WRITERS)
+  @ApiBody({ schema: openApiSchema(UpdateLinkRequestSchema) })
+  @ApiOkResponse({ schema: openApiSchema(LinkDetailSchema, 'output') })
+  update(
+    @CurrentUser() caller: AuthUser,
+    @Param('id', uuidParam()) id: string,
+    @Body(new ZodValidationPipe(UpdateLinkRequestSchema)) body: z.output<typeof UpdateLinkRequestSchema>,
+  ): Promise<LinkDetail> {
+    return this.links.update(caller, id, body);
+  }
+
+  @Get(':id/revisions')
+  @ApiOkResponse({ schema: openApiSchema(RevisionListResponseSchema, 'output') })
+  listRevisions(@CurrentUser() caller: AuthUser, @Param('id', uuidParam()) id: string): Promise<RevisionListResponse> {
+    return this.links.listRevisions(caller, id);
+  }
+
+  @Post(':id/revisions')
+  @Roles(...DESIGN_WRITERS)
+  @ApiBody({ schema: openApiSchema(CreateRevisionRequestSchema) })
+  @ApiCreatedResponse({ schema: openApiSchema(LinkDetailSchema, 'output') })
+  @ApiConflictResponse({ description: 'baseRevision is not the latest', schema: openApiSchema(RevisionConflictBodySchema, 'output') })
+  createRevision(
+    @CurrentUser() caller: AuthUser,
+    @Param('id', uuidParam()) id: string,
+    @Body(new ZodValidationPipe(CreateRevisionRequestSchema)) body: z.output<typeof CreateRevisionRequestSchema>,
+  ): Promise<LinkDetail> {
+    return this.links.createRevision(caller, id, body);
+  }
+
+  @Get(':id/revisions/:revision')
+  @ApiOkResponse({ schema: openApiSchema(RevisionSchema, 'output') })
+  getRevision(@CurrentUser() caller: AuthUser, @Param('id', uuidParam()) id: string, @Param('revision', revisionParam()) revision: number): Promise<Revision> {
+    return this.links.getRevision(caller, id, revision);
+  }
+
+  @Get(':id/diff')
+  @ApiQuery({ name: 'from', type: Number })
+  @ApiQuery({ name: 'to', type: Number })
+  @ApiOkResponse({ schema: openApiSchema(RevisionDiffResponseSchema, 'output') })
+  diff(
+    @CurrentUser() caller: AuthUser,
+    @Param('id', uuidParam()) id: string,
+    @Query(new ZodValidationPipe(RevisionDiffQuerySchema)) query: z.output<typeof RevisionDiffQuerySchema>,
+  ): Promise<RevisionDiffResponse> {
+    return this.links.diff(caller, id, query.from, query.to);
+  }
+
+  @Get(':id/reviews')
+  @ApiOkResponse({ schema: openApiSchema(ReviewListResponseSchema, 'output') })
+  listReviews(@CurrentUser() caller: AuthUser, @Param('id', uuidParam()) id: string): Promise<ReviewListResponse> {
+    return this.reviews.list(caller, id);
+  }
+
+  @Post(':id/revisions/:revision/submit')
+  @Roles(...DESIGN_WRITERS)
+  @HttpCode(HttpStatus.OK)
+  @ApiBody({ schema: openApiSchema(ReviewCommentRequestSchema), required: false })
+  @ApiOkResponse({ schema: openApiSchema(ReviewActionResponseSchema, 'output') })
+  submit(
+    @CurrentUser() caller: AuthUser,
+    @Param('id', uuidParam()) id: string,
+    @Param('revision', revisionParam()) revision: number,
+    @Body(new ZodValidationPipe(ReviewCommentRequestSchema)) body: z.output<typeof ReviewCommentRequestSchema>,
+  ): Promise<ReviewActionResponse> {
+    return this.reviews.act(caller, id, revision, 'submit', body.comment);
+  }
+
+  @Post(':id/revisions/:revision/approve')
+  @Roles(...REVIEWERS)
+  @HttpCode(HttpStatus.OK)
+  @ApiBody({ schema: openApiSchema(ReviewCommentRequestSchema), required: false })
+  @ApiOkResponse({ schema: openApiSchema(ReviewActionResponseSchema, 'output') })
+  approve(
+    @CurrentUser() caller: AuthUser,
+    @Param('id', uuidParam()) id: string,
+    @Param('revision', revisionParam()) revision: number,
+    @Body(new ZodValidationPipe(ReviewCommentRequestSchema)) body: z.output<typeof ReviewCommentRequestSchema>,
+  ): Promise<ReviewActionResponse> {
+    return this.reviews.act(caller, id, revision, 'approve', body.comment);
+  }
+
+  @Post(':id/revisions/:revision/return')
+  @Roles(...REVIEWERS)
+  @HttpCode(HttpStatus.OK)
+  @ApiBody({ schema: openApiSchema(ReturnRevisionRequestSchema) })
+  @ApiOkResponse({ schema: openApiSchema(ReviewActionResponseSchema, 'output') })
+  returnToDraft(
+    @CurrentUser() caller: AuthUser,
+    @Param('id', uuidParam()) id: string,
+    @Param('revision', revisionParam()) revision: number,
+    @Body(new ZodValidationPipe(ReturnRevisionRequestSchema)) body: z.output<typeof ReturnRevisionRequestSchema>,
+  ): Promise<ReviewActionResponse> {
+    return this.reviews.act(caller, id, revision, 'return', body.comment);
+  }
+
+  @Post(':id/revisions/:revision/install')
+  @Roles('installer', 'admin')
+  @HttpCode(HttpStatus.OK)
+  @ApiBody({ schema: openApiSchema(ReviewCommentRequestSchema), required: false })
+  @ApiOkResponse({ schema: openApiSchema(ReviewActionResponseSchema, 'output') })
+  install(
+    @CurrentUser() caller: AuthUser,
+    @Param('id', uuidParam()) id: string,
+    @Param('revision', revisionParam()) revision: number,
+    @Body(new ZodValidationPipe(ReviewCommentRequestSchema)) body: z.output<typeof ReviewCommentRequestSchema>,
+  ): Promise<ReviewActionResponse> {
+    return this.reviews.act(caller, id, revision, 'install', body.comment);
+  }
+}
