@@ -5,7 +5,7 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { evaluateLink, formatZodIssues, linkMarginAtRangeDb, LinkDesignSchema, maxRange, type LinkDesignInput } from '../src/index.js';
+import { availabilityFromRecords, evaluateLink, formatZodIssues, linkMarginAtRangeDb, LinkDesignSchema, maxRange, type LinkDesignInput } from '../src/index.js';
 
 // exp(log x) can round a hair outside [min, max]: clamp so the bounds themselves stay reachable.
 const logUniform = (min: number, max: number) =>
@@ -49,6 +49,28 @@ const designArbitrary: fc.Arbitrary<LinkDesignInput> = fc.record({
 });
 
 describe('link budget properties', () => {
+  it('availability from records counts exactly the records whose own budget falls below the requirement', () => {
+    fc.assert(
+      fc.property(
+        designArbitrary,
+        fc.array(logUniform(10, 100_000), { minLength: 1, maxLength: 40 }),
+        fc.double({ min: -10, max: 30, noNaN: true }),
+        (design, visibilityM, requiredMarginDb) => {
+          const calm: LinkDesignInput = { ...design, scintillation: { include: false, probability: 1e-3 } };
+          const result = availabilityFromRecords(calm, { visibilityM, visibilityDefinition: design.atmosphere.visibilityDefinition }, { requiredMarginDb });
+          // independent: one full budget per record
+          const down = visibilityM.filter((v) => evaluateLink({ ...calm, atmosphere: { ...calm.atmosphere, visibilityM: v } }).linkMarginDb < requiredMarginDb).length;
+          // a record sitting within 1e-9 dB of the requirement may fall either way
+          const nearBoundary = visibilityM.filter(
+            (v) => Math.abs(evaluateLink({ ...calm, atmosphere: { ...calm.atmosphere, visibilityM: v } }).linkMarginDb - requiredMarginDb) < 1e-9,
+          ).length;
+          expect(Math.abs(result.unavailableHours - down)).toBeLessThanOrEqual(nearBoundary);
+        },
+      ),
+      { numRuns: 200 },
+    );
+  });
+
   it('maxRangeM returns a range where the margin equals the requirement and is not met just beyond', () => {
     fc.assert(
       fc.property(designArbitrary, fc.double({ min: -20, max: 40, noNaN: true }), (design, requiredMarginDb) => {

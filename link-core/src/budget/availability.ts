@@ -9,6 +9,9 @@ import type { LinkDesignInput, VisibilityDefinition } from '../schemas/link-desi
 import { evaluateChain, resolveDesign, specificAttenuationDbPerKm, type ResolvedDesign } from './link-chain.js';
 
 const HOURS_PER_YEAR = 8766; // 365.25 days
+// Clamp of the atmosphere module's visibility inverse [km] (1 m … 1000 km).
+const INVERSE_MIN_KM = 1e-3;
+const INVERSE_MAX_KM = 1e3;
 
 /** Options shared by the availability routines. */
 export interface AvailabilityOptions {
@@ -206,6 +209,18 @@ export function availabilityFromRecords(design: LinkDesignInput, records: Visibi
   if (timestamps && timestamps.length !== count) throw new RangeError('records.timestampsMs: must have one timestamp per visibility record');
   const scale = records.visibilityDefinition === 'mor-5-percent' ? VISIBILITY_2_PERCENT_PER_MOR / 1000 : 1 / 1000;
   const rangeKm = resolved.rangeM / 1000;
+  // γ falls monotonically with V for λ ≥ 550 nm, so "down" is "V below V_min": one inverse, then a
+  // comparison per record. Otherwise (or when V_min sits on the inverse's clamp) every record's
+  // attenuation is evaluated.
+  let threshold2PercentKm = Number.NaN;
+  if (resolved.wavelengthM >= VISIBILITY_REFERENCE_WAVELENGTH_M) {
+    if (!(maxAttenuationDbPerKm > 0)) threshold2PercentKm = Infinity;
+    else {
+      const inverse = visibility2PercentForAttenuationKm(resolved.kruse, resolved.wavelengthM, maxAttenuationDbPerKm);
+      if (inverse > INVERSE_MIN_KM && inverse < INVERSE_MAX_KM) threshold2PercentKm = inverse;
+    }
+  }
+  const byThreshold = !Number.isNaN(threshold2PercentKm);
   let usable = 0;
   let coveredHours = 0;
   let downHours = 0;
@@ -213,28 +228,35 @@ export function availabilityFromRecords(design: LinkDesignInput, records: Visibi
   let longestOutage = 0;
   let currentOutage = 0;
   let worstMargin = Infinity;
+  let lowestVisibility2PercentKm = Infinity;
   let previousDown = false;
   for (let i = 0; i < count; i++) {
     let durationH = intervalH;
     let contiguous = true;
-    if (timestamps) {
-      if (i + 1 < count) {
-        const stepH = (timestamps[i + 1]! - timestamps[i]!) / 3_600_000;
-        if (!(stepH > 0)) throw new RangeError(`records.timestampsMs.${i + 1}: timestamps must increase strictly`);
-        if (stepH <= maxGapH) durationH = stepH;
-        else contiguous = false;
-      }
+    if (timestamps && i + 1 < count) {
+      const stepH = (timestamps[i + 1]! - timestamps[i]!) / 3_600_000;
+      if (!(stepH > 0)) throw new RangeError(`records.timestampsMs.${i + 1}: timestamps must increase strictly`);
+      if (stepH <= maxGapH) durationH = stepH;
+      else contiguous = false;
     }
     const v = visibility[i]!;
-    if (!(v > 0) || !Number.isFinite(v)) {
+    if (!(v > 0) || v === Infinity) {
       previousDown = false;
       continue;
     }
     usable++;
     coveredHours += durationH;
-    const margin = clearAir - specificAttenuationDbPerKm(resolved, v * scale) * rangeKm;
-    if (margin < worstMargin) worstMargin = margin;
-    if (margin < requiredMarginDb) {
+    const visibility2PercentKm = v * scale;
+    let down: boolean;
+    if (byThreshold) {
+      down = visibility2PercentKm < threshold2PercentKm;
+      if (visibility2PercentKm < lowestVisibility2PercentKm) lowestVisibility2PercentKm = visibility2PercentKm;
+    } else {
+      const margin = clearAir - specificAttenuationDbPerKm(resolved, visibility2PercentKm) * rangeKm;
+      if (margin < worstMargin) worstMargin = margin;
+      down = margin < requiredMarginDb;
+    }
+    if (down) {
       downHours += durationH;
       if (previousDown) currentOutage += durationH;
       else {
@@ -248,6 +270,7 @@ export function availabilityFromRecords(design: LinkDesignInput, records: Visibi
       previousDown = false;
     }
   }
+  if (byThreshold && usable > 0) worstMargin = clearAir - specificAttenuationDbPerKm(resolved, lowestVisibility2PercentKm) * rangeKm;
   const availability = coveredHours > 0 ? (coveredHours - downHours) / coveredHours : Number.NaN;
   return {
     clearAirMarginDb: clearAir,

@@ -5,11 +5,11 @@
 import { coherenceRadiusM } from '../turbulence/rytov.js';
 import type { BudgetCheck, BudgetTerm, BudgetTermKey, LinkBudget } from '../schemas/link-budget.schema.js';
 import type { LinkDesignInput } from '../schemas/link-design.schema.js';
-import { TERM_DESCRIPTIONS } from './budget-terms.js';
+import { TERM_DESCRIPTIONS, type TermDescription } from './budget-terms.js';
 import { evaluateChain, resolveDesign, specificAttenuationDbPerKm, type ResolvedDesign } from './link-chain.js';
 
-function term(key: BudgetTermKey, valueDb: number): BudgetTerm {
-  const description = TERM_DESCRIPTIONS[key];
+// The description is passed in (not looked up by key) so that each call site stays monomorphic.
+function term(key: BudgetTermKey, description: TermDescription, valueDb: number): BudgetTerm {
   return { key, label: description.label, valueDb, unit: description.unit, method: description.method, source: description.source };
 }
 
@@ -84,15 +84,15 @@ export function evaluateLink(design: LinkDesignInput): LinkBudget {
   const diffractionRad = diffractionHalfAngle(resolved);
   const defocused = resolved.halfAngleDivergenceRad > diffractionRad;
   const terms: BudgetTerm[] = [
-    term('transmitPower', resolved.powerDbm),
-    term('transmitOptics', -resolved.transmitOpticsLossDb),
-    term('geometricSpread', -chain.geometricLossDb),
-    term('atmosphericAttenuation', -chain.atmosphericLossDb),
-    term('pointingLoss', -chain.pointingLossDb),
-    term('receiveOptics', -resolved.receiveOpticsLossDb),
-    term('receiverSensitivity', -resolved.sensitivityDbm),
-    term('scintillationFade', -chain.scintillationFadeMarginDb),
-    term('systemAllowance', -resolved.systemMarginDb),
+    term('transmitPower', TERM_DESCRIPTIONS.transmitPower, resolved.powerDbm),
+    term('transmitOptics', TERM_DESCRIPTIONS.transmitOptics, -resolved.transmitOpticsLossDb),
+    term('geometricSpread', TERM_DESCRIPTIONS.geometricSpread, -chain.geometricLossDb),
+    term('atmosphericAttenuation', TERM_DESCRIPTIONS.atmosphericAttenuation, -chain.atmosphericLossDb),
+    term('pointingLoss', TERM_DESCRIPTIONS.pointingLoss, -chain.pointingLossDb),
+    term('receiveOptics', TERM_DESCRIPTIONS.receiveOptics, -resolved.receiveOpticsLossDb),
+    term('receiverSensitivity', TERM_DESCRIPTIONS.receiverSensitivity, -resolved.sensitivityDbm),
+    term('scintillationFade', TERM_DESCRIPTIONS.scintillationFade, -chain.scintillationFadeMarginDb),
+    term('systemAllowance', TERM_DESCRIPTIONS.systemAllowance, -resolved.systemMarginDb),
   ];
   return {
     terms,

@@ -99,8 +99,17 @@ export function specificAttenuationDbPerKm(design: ResolvedDesign, visibility2Pe
 export function centredGeometricLossDb(beamRadiusM: number, apertureRadiusM: number, obscurationRadiusM: number): number {
   const inverseSquare = 2 / (beamRadiusM * beamRadiusM);
   const openFraction = -Math.expm1(-inverseSquare * (apertureRadiusM - obscurationRadiusM) * (apertureRadiusM + obscurationRadiusM));
-  return DB_PER_NEPER_POWER * inverseSquare * obscurationRadiusM * obscurationRadiusM - 10 * Math.log10(openFraction);
+  if (obscurationRadiusM === 0) {
+    lastCaptureFraction = openFraction;
+    return -10 * Math.log10(openFraction);
+  }
+  const shadowExponent = inverseSquare * obscurationRadiusM * obscurationRadiusM;
+  lastCaptureFraction = Math.exp(-shadowExponent) * openFraction;
+  return DB_PER_NEPER_POWER * shadowExponent - 10 * Math.log10(openFraction);
 }
+
+// Captured fraction of the last centredGeometricLossDb call (kept beside the loss to avoid a pow).
+let lastCaptureFraction = 0;
 
 /** Numbers of one evaluation of the chain (all losses positive, in dB). */
 export interface ChainResult {
@@ -116,6 +125,21 @@ export interface ChainResult {
   linkMarginDb: number;
 }
 
+// The chain's result is written into one scratch object: the callers read it at once, and the hot
+// paths (maxRange, the samplers, evaluateLink) then allocate nothing per evaluation.
+const scratch: ChainResult = {
+  beamRadiusAtReceiverM: 0,
+  captureFraction: 0,
+  geometricLossDb: 0,
+  atmosphericLossDb: 0,
+  pointingLossDb: 0,
+  receivedPowerDbm: 0,
+  rytovVarianceSpherical: 0,
+  scintillationIndex: 0,
+  scintillationFadeMarginDb: 0,
+  linkMarginDb: 0,
+};
+
 /**
  * Evaluates P_rx = P_tx − L_tx − L_geo − γL − L_point − L_rx and M = P_rx − S − F_scint − M_system.
  *
@@ -123,14 +147,14 @@ export interface ChainResult {
  * @param rangeM path length [m], > 0
  * @param attenuationDbPerKm specific atmospheric attenuation γ [dB/km], ≥ 0
  * @param includeScintillation whether to subtract the fade margin
- * @returns the chain's numbers
+ * @returns the chain's numbers, in a shared object that the next call overwrites (copy what you keep)
  * @see DOMAIN §8; the sources of each term are in budget-terms.ts.
  */
 export function evaluateChain(design: ResolvedDesign, rangeM: number, attenuationDbPerKm: number, includeScintillation: boolean): ChainResult {
   const beamRadiusM = launchBeamRadiusAtRangeM(design.wavelengthM, design.apertureBeamRadiusM, design.halfAngleDivergenceRad, design.m2, rangeM);
   const apertureRadiusM = design.apertureDiameterM / 2;
   const geometricLossDb = centredGeometricLossDb(beamRadiusM, apertureRadiusM, apertureRadiusM * design.obscurationRatio);
-  const captureFraction = Math.pow(10, -geometricLossDb / 10);
+  const captureFraction = lastCaptureFraction;
   const atmosphericLossDb = (attenuationDbPerKm * rangeM) / 1000;
   const pointingLossDb = meanPointingLossDb(beamRadiusM, design.jitterSigmaPerAxisRad * rangeM, design.staticErrorRad * rangeM);
   const receivedPowerDbm =
@@ -145,16 +169,15 @@ export function evaluateChain(design: ResolvedDesign, rangeM: number, attenuatio
     scintillationIndex = apertureAveragedScintillationIndexFast(design.wavelengthM, rangeM, design.cn2, design.apertureDiameterM);
     scintillationFadeMarginDb = apertureAveragedFadeMarginDb(design.wavelengthM, rangeM, design.cn2, design.apertureDiameterM, design.fadeProbability);
   }
-  return {
-    beamRadiusAtReceiverM: beamRadiusM,
-    captureFraction,
-    geometricLossDb,
-    atmosphericLossDb,
-    pointingLossDb,
-    receivedPowerDbm,
-    rytovVarianceSpherical,
-    scintillationIndex,
-    scintillationFadeMarginDb,
-    linkMarginDb: receivedPowerDbm - design.sensitivityDbm - scintillationFadeMarginDb - design.systemMarginDb,
-  };
+  scratch.beamRadiusAtReceiverM = beamRadiusM;
+  scratch.captureFraction = captureFraction;
+  scratch.geometricLossDb = geometricLossDb;
+  scratch.atmosphericLossDb = atmosphericLossDb;
+  scratch.pointingLossDb = pointingLossDb;
+  scratch.receivedPowerDbm = receivedPowerDbm;
+  scratch.rytovVarianceSpherical = rytovVarianceSpherical;
+  scratch.scintillationIndex = scintillationIndex;
+  scratch.scintillationFadeMarginDb = scintillationFadeMarginDb;
+  scratch.linkMarginDb = receivedPowerDbm - design.sensitivityDbm - scintillationFadeMarginDb - design.systemMarginDb;
+  return scratch;
 }

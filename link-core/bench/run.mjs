@@ -1,0 +1,132 @@
+/**
+ * link-core benchmarks, run against the built package (dist) on one core:
+ *   npm run bench            (builds link-core first)
+ * Each figure is one line `bench <name>: <value> <unit> (target <op> <value> <unit>)`.
+ *
+ * Times are CPU time of this process (see cpuSeconds), so a busy shared machine does not distort them.
+ * Budgets: every evaluation is a different design drawn from a seeded generator before the clock
+ * starts, so nothing can be answered from a cache. Availability: ten years of hourly, time-stamped
+ * visibility records (synthetic, seeded), median of repeated runs after a warm-up.
+ */
+import { availabilityFromRecords, evaluateLink } from '@beamwright/link-core';
+
+/** Mulberry32: a small, fast, seeded PRNG (public domain, Tommy Ettinger). */
+function seededRandom(seed) {
+  let state = seed >>> 0;
+  return () => {
+    state = (state + 0x6d2b79f5) >>> 0;
+    let t = state;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
+const WAVELENGTHS_M = [785e-9, 850e-9, 1310e-9, 1550e-9];
+
+/** Designs across the span of practice (DOMAIN §6.1, §7): ranges 0.2–5 km, fog to clear air, calm to strong turbulence. */
+function generateDesigns(count, seed, includeScintillation) {
+  const random = seededRandom(seed);
+  const uniform = (min, max) => min + (max - min) * random();
+  const logUniform = (min, max) => Math.exp(uniform(Math.log(min), Math.log(max)));
+  const designs = new Array(count);
+  for (let i = 0; i < count; i++) {
+    designs[i] = {
+      rangeM: logUniform(200, 5000),
+      transmitter: {
+        wavelengthM: WAVELENGTHS_M[Math.floor(random() * 4)],
+        powerDbm: uniform(5, 27),
+        waistRadiusM: uniform(0.0075, 0.04),
+        halfAngleDivergenceRad: random() < 0.15 ? undefined : uniform(0.25e-3, 1.5e-3),
+        m2: uniform(1, 1.5),
+        opticsLossDb: uniform(1, 3),
+      },
+      receiver: {
+        apertureDiameterM: uniform(0.05, 0.25),
+        sensitivityDbm: uniform(-46, -20),
+        opticsLossDb: uniform(1, 3),
+        obscurationRatio: random() < 0.3 ? uniform(0.1, 0.4) : 0,
+      },
+      pointing: { jitterSigmaPerAxisRad: logUniform(10e-6, 300e-6), staticErrorRad: uniform(0, 200e-6) },
+      atmosphere: {
+        model: random() < 0.9 ? 'kim' : 'kruse',
+        visibilityM: logUniform(200, 50_000),
+        visibilityDefinition: random() < 0.8 ? 'contrast-2-percent' : 'mor-5-percent',
+        cn2: logUniform(1e-16, 1e-13),
+      },
+      scintillation: { include: includeScintillation, probability: random() < 0.6 ? 1e-3 : logUniform(1e-6, 1e-2) },
+      systemMarginDb: uniform(0, 3),
+    };
+  }
+  return designs;
+}
+
+/**
+ * Seconds of CPU time this process spent running `work`. The machine may be shared (CI runners,
+ * several jobs on two cores): CPU time measures what one core delivers, where wall time would
+ * measure the neighbours. Single-threaded code, so CPU time ≈ wall time on an idle machine.
+ */
+function cpuSeconds(work) {
+  const before = process.cpuUsage();
+  work();
+  const used = process.cpuUsage(before);
+  return (used.user + used.system) / 1e6;
+}
+
+function budgetsPerSecond(designs) {
+  let checksum = 0;
+  const seconds = cpuSeconds(() => {
+    for (let i = 0; i < designs.length; i++) checksum += evaluateLink(designs[i]).linkMarginDb;
+  });
+  if (!Number.isFinite(checksum)) throw new Error('a budget was not finite');
+  return designs.length / seconds;
+}
+
+function line(name, value, unit, op, target) {
+  console.log(`bench ${name}: ${value} ${unit} (target ${op} ${target} ${unit})`);
+}
+
+// --- budgets without scintillation -------------------------------------------------------------
+{
+  budgetsPerSecond(generateDesigns(100_000, 1, false)); // warm-up on other designs
+  const rate = budgetsPerSecond(generateDesigns(400_000, 2, false));
+  line('budget-evaluations-no-scintillation', Math.round(rate), 'budgets/s', '>=', 1_000_000);
+}
+
+// --- budgets with the gamma-gamma fade margin --------------------------------------------------
+{
+  budgetsPerSecond(generateDesigns(20_000, 3, true));
+  const rate = budgetsPerSecond(generateDesigns(100_000, 4, true));
+  line('budget-evaluations-gamma-gamma', Math.round(rate), 'budgets/s', '>=', 100_000);
+}
+
+// --- availability over ten years of hourly records ---------------------------------------------
+{
+  const hours = 87_600;
+  const random = seededRandom(5);
+  const makeRecords = () => {
+    const visibilityM = new Float64Array(hours);
+    const timestampsMs = new Float64Array(hours);
+    const startMs = Date.UTC(2015, 0, 1);
+    let fogHoursLeft = 0;
+    for (let i = 0; i < hours; i++) {
+      timestampsMs[i] = startMs + i * 3_600_000;
+      if (fogHoursLeft === 0 && random() < 0.002) fogHoursLeft = 1 + Math.floor(random() * 12);
+      visibilityM[i] = fogHoursLeft > 0 ? Math.exp(Math.log(80) + random() * Math.log(30)) : Math.exp(Math.log(3000) + random() * Math.log(10));
+      if (fogHoursLeft > 0) fogHoursLeft--;
+    }
+    return { visibilityM, timestampsMs, visibilityDefinition: 'mor-5-percent' };
+  };
+  const [design] = generateDesigns(1, 6, false);
+  const warmUp = makeRecords();
+  for (let i = 0; i < 5; i++) availabilityFromRecords(design, warmUp);
+  const records = makeRecords();
+  const timings = [];
+  let availability = 0;
+  for (let i = 0; i < 11; i++) {
+    timings.push(1000 * cpuSeconds(() => (availability += availabilityFromRecords(design, records).availability)));
+  }
+  if (!Number.isFinite(availability)) throw new Error('availability was not finite');
+  timings.sort((a, b) => a - b);
+  line('availability-87600-hourly-records', timings[5].toFixed(2), 'ms', '<', 20);
+}
