@@ -127,8 +127,10 @@ export interface OcularMpeDetails {
 
 /**
  * Ocular MPE at the cornea in full detail (small source, C6 = 1).
- * 700–1050 nm and 1050–1400 nm: H = 18·C4·C7·t^0.75 J/m² up to 10 s (from 1.8e-5 s, resp. 5e-5 s),
- * E = 10·C4·C7 W/m² for t > 10 s (to 3e4 s and beyond for these small sources).
+ * 700–1050 nm and 1050–1400 nm: H = 18·C4·C7·t^0.75 J/m² below 10 s (from 1.8e-5 s, resp. 5e-5 s),
+ * E = 10·C4·C7 W/m² for t ≥ 10 s (to 3e4 s and beyond for these small sources). The two rows of the
+ * table do not meet exactly at 10 s (149.7 against 147.9 J/m² at 785 nm); the irradiance row applies
+ * from 10 s on, as the table states.
  * 1500–1800 nm: H = 1e4 J/m² from 1e-9 s to 10 s, E = 1000 W/m² beyond.
  * 2014 edition at 1200–1400 nm: the retinal value is capped by the corneal guide 2000·C4 W/m².
  *
@@ -163,7 +165,7 @@ export function ocularMpeDetails(input: OcularMpeInput): OcularMpeDetails {
   const c7 = correctionFactorC7(input.wavelengthM, edition);
   const shortest = nm < 1050 ? 1.8e-5 : 5e-5;
   if (t < shortest) throw new RangeError(`exposureS: exposures shorter than ${shortest} s are not covered at ${nm.toFixed(0)} nm (got ${t})`);
-  const retinalMpeWPerM2 = t <= 10 ? (18 * c4 * c7 * Math.pow(t, 0.75)) / t : 10 * c4 * c7;
+  const retinalMpeWPerM2 = t < 10 ? (18 * c4 * c7 * Math.pow(t, 0.75)) / t : 10 * c4 * c7;
   const cornealGuideMpeWPerM2 = edition === 'IEC 60825-1:2014' && nm >= 1200 ? CORNEAL_GUIDE_FACTOR_W_PER_M2 * c4 : null;
   const mpeWPerM2 = cornealGuideMpeWPerM2 === null ? retinalMpeWPerM2 : Math.min(retinalMpeWPerM2, cornealGuideMpeWPerM2);
   return {
@@ -195,14 +197,22 @@ export function ocularMpeWPerM2(input: OcularMpeInput): number {
 
 /**
  * Ocular MPE as radiant exposure H over the exposure [J/m²] (MPE irradiance × t).
- * 700–1400 nm, t ≤ 10 s: 18·C4·C7·t^0.75 (850 nm, 1 s: 35.91 J/m²); 1500–1800 nm, t ≤ 10 s: 1e4 J/m².
+ * 700–1400 nm, t ≤ 10 s: 18·C4·C7·t^0.75 (850 nm, 1 s: 35.91 J/m²; at exactly 10 s the upper bound of
+ * this row is used); 1500–1800 nm, t ≤ 10 s: 1e4 J/m²; beyond 10 s the irradiance MPE × t.
  *
  * @param input `{ wavelengthM, exposureS, edition? }` as for {@link ocularMpeWPerM2}
  * @returns H [J/m²]
  * @see IEC 60825-1 Annex A Table A.1 [from memory].
  */
 export function ocularMpeRadiantExposureJPerM2(input: OcularMpeInput): number {
-  return ocularMpeDetails(input).mpeJPerM2;
+  const details = ocularMpeDetails(input);
+  const nm = input.wavelengthM * 1e9;
+  // The time-dependent row covers t up to and including 10 s (its upper bound).
+  if (input.exposureS === 10 && nm <= 1400) {
+    const retinal = 18 * details.c4 * details.c7 * Math.pow(10, 0.75);
+    return details.cornealGuideMpeWPerM2 === null ? retinal : Math.min(retinal, details.cornealGuideMpeWPerM2 * 10);
+  }
+  return details.mpeJPerM2;
 }
 
 function limitingApertureDiameterForBand(band: 'near-infrared' | 'far-infrared', exposureS: number): number {
