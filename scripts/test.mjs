@@ -16,8 +16,8 @@ import os from 'node:os';
 import path from 'node:path';
 import { ensurePostgresBinaries, ensureRoleAndDatabase, findFreePort, isPortInUse, startThrowawayPostgres } from './lib/postgres.mjs';
 import {
-  DEFAULT_ENV, ROOT_DIR, WORKSPACES, ensureChromium, ensureNodeModules, killRunningChildren, loadDotEnv,
-  runCommand, step, waitForHealth,
+  DEFAULT_ENV, ROOT_DIR, WORKSPACES, ensureChromium, ensureNodeModules, killRunningChildren, runCommand, step,
+  waitForHealth,
 } from './lib/project.mjs';
 
 const SUITE_TIMEOUT_MS = 12 * 60_000;
@@ -167,7 +167,7 @@ function printSummary() {
 }
 
 async function main() {
-  loadDotEnv();
+  // No .env here on purpose: the suite must not depend on a developer's local settings.
   const databasePort = Number(process.env.TEST_DATABASE_PORT ?? 54339);
   const serverPort = Number(process.env.TEST_SERVER_PORT ?? 3100);
 
@@ -187,9 +187,13 @@ async function main() {
     return;
   }
 
+  // Only what the suites need: each test setup supplies its own defaults for the rest (a token
+  // lifetime, for instance), so nothing from the shell or a local .env leaks into the tests.
+  const inherited = { ...process.env };
+  for (const name of Object.keys(DEFAULT_ENV)) delete inherited[name];
+  for (const name of ['JWT_SECRET', 'UI_DIST_DIR']) delete inherited[name];
   const testEnv = {
-    ...process.env,
-    ...DEFAULT_ENV,
+    ...inherited,
     NODE_ENV: 'test',
     CI: process.env.CI ?? 'true',
     DATABASE_HOST: cluster.host,
@@ -198,7 +202,6 @@ async function main() {
     DATABASE_PASSWORD: cluster.password,
     DATABASE_NAME: cluster.database,
     JWT_SECRET: 'test-only-jwt-secret-not-for-production',
-    JWT_EXPIRES_IN: '1h',
   };
 
   if (selected('lint')) await lintSuite();
@@ -267,7 +270,9 @@ async function browserSuite(testEnv, wantedPort) {
   });
   const serverPort = (await isPortInUse(wantedPort)) ? await findFreePort() : wantedPort;
   if (serverPort !== wantedPort) process.stdout.write(`  port ${wantedPort} is busy: the test server uses ${serverPort}\n`);
-  const env = { ...testEnv, NODE_ENV: 'production', DATABASE_NAME: browserDatabase, PORT: String(serverPort), HOST: '127.0.0.1' };
+  const env = {
+    ...DEFAULT_ENV, ...testEnv, NODE_ENV: 'production', DATABASE_NAME: browserDatabase, PORT: String(serverPort), HOST: '127.0.0.1',
+  };
 
   const prerequisites = [
     ['build ui', ['run', 'build', '-w', '@beamwright/ui']],
