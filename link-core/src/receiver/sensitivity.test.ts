@@ -37,3 +37,14 @@ describe('receiver sensitivity', () => {
     expect(() => checkReceivedPower(-20, -36, -40)).toThrow(/overloadDbm/);
   });
 });
+
+describe('sensitivity source', () => {
+  it('prefers the datasheet figure and otherwise estimates from noise figures', async () => {
+    const { resolveSensitivity } = await import('./sensitivity.js');
+    expect(resolveSensitivity({ kind: 'datasheet', sensitivityDbm: -36 })).toMatchObject({ sensitivityDbm: -36, method: 'datasheet' });
+    const estimated = resolveSensitivity({ kind: 'noise-figures', lineRateBitPerS: 1.25e9, inputNoiseCurrentDensityAPerSqrtHz: 15e-12, responsivityAPerW: 0.9, q: 7.034 });
+    // RX-03-pin-1G: −24.45 dBm (Agrawal ch. 4 with an illustrative 15 pA/√Hz).
+    expect(estimated.sensitivityDbm).toBeCloseTo(-24.4496, 3);
+    expect(estimated.method).toBe('pin-thermal-limit');
+  });
+});

@@ -213,3 +213,40 @@ export function checkReceivedPower(receivedPowerDbm: number, sensitivityDbm: num
     message: `Received power is ${marginAboveSensitivityDb.toFixed(1)} dB above the sensitivity${headroomBelowOverloadDb === null ? '' : ` and ${headroomBelowOverloadDb.toFixed(1)} dB below overload`}.`,
   };
 }
+
+/** Where a sensitivity comes from: the terminal datasheet (preferred) or noise figures. */
+export type SensitivitySource =
+  | { kind: 'datasheet'; sensitivityDbm: number; ber?: number }
+  | ({ kind: 'noise-figures' } & ReceiverSensitivityInput);
+
+/** Result of {@link resolveSensitivity}. */
+export interface ResolvedSensitivity {
+  /** Sensitivity at the target BER [dBm]. */
+  sensitivityDbm: number;
+  /** `datasheet`, `pin-thermal-limit` or `apd`. */
+  method: 'datasheet' | 'pin-thermal-limit' | 'apd';
+  /** Citation of the method, for the budget's term list. */
+  source: string;
+}
+
+/**
+ * The sensitivity to use in the budget: the datasheet figure when the user gives one, otherwise the
+ * Agrawal estimate from noise figures ({@link receiverSensitivity}).
+ *
+ * @param input `{ kind: 'datasheet', sensitivityDbm }` (finite) or `{ kind: 'noise-figures', ...ReceiverSensitivityInput }`
+ * @returns sensitivity [dBm], the method and its source
+ * @see Agrawal (2010), ch. 4; common practice (prefer the terminal datasheet at the link's BER target).
+ */
+export function resolveSensitivity(input: SensitivitySource): ResolvedSensitivity {
+  if (input.kind === 'datasheet') {
+    if (!Number.isFinite(input.sensitivityDbm)) throw new RangeError(`sensitivityDbm: must be a finite number (got ${String(input.sensitivityDbm)})`);
+    return { sensitivityDbm: input.sensitivityDbm, method: 'datasheet', source: 'terminal datasheet' };
+  }
+  const result = receiverSensitivity(input);
+  const apd = (input.apdGain ?? 1) > 1;
+  return {
+    sensitivityDbm: result.sensitivityDbm,
+    method: apd ? 'apd' : 'pin-thermal-limit',
+    source: `Agrawal, Fiber-Optic Communication Systems, 4th ed. (2010), ch. 4: ${apd ? 'APD, P = (Q/R)(σ_T/M + e·F_A·Q·Δf)' : 'thermal-noise-limited PIN, P = Q·σ_T/R'}`,
+  };
+}

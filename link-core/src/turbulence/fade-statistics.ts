@@ -13,7 +13,9 @@
  * scintillation, two or three in strong turbulence.
  * The 1F2 series (DOMAIN §6.7, method 2) is kept beside it as an independent cross-check.
  */
+import erfc from '@stdlib/math-base-special-erfc';
 import gamma from '@stdlib/math-base-special-gamma';
+import gammaincinv from '@stdlib/math-base-special-gammaincinv';
 import gammaln from '@stdlib/math-base-special-gammaln';
 import normalQuantile from '@stdlib/stats-base-dists-normal-quantile';
 import { requireOpenUnitInterval, requirePositive } from '../atmosphere/input-guards.js';
@@ -126,8 +128,9 @@ function startingCentre(logX: number, m: number, a: number): number {
 }
 
 function validateShapes(alpha: number, beta: number): void {
-  requirePositive('alpha', alpha);
-  requirePositive('beta', beta);
+  // Infinity is allowed: an infinite shape is a non-fluctuating factor (e.g. zero Rytov variance).
+  if (!(alpha > 0)) throw new RangeError(`alpha: must be greater than 0 (got ${String(alpha)})`);
+  if (!(beta > 0)) throw new RangeError(`beta: must be greater than 0 (got ${String(beta)})`);
 }
 
 /**
@@ -251,6 +254,8 @@ export function gammaGammaQuantileWithStop(alpha: number, beta: number, probabil
   }
   const m = alpha > beta ? alpha : beta;
   const a = alpha > beta ? beta : alpha;
+  // One factor does not fluctuate: I is Gamma(a, 1/a) distributed.
+  if (m === Infinity) return gammaincinv(probability, a) / a;
   const lnGammaM = gammaln(m);
   const lnGammaA = gammaln(a);
   // Cornish–Fisher start from the exact cumulants of ln I = ln X + ln Y.
@@ -333,7 +338,8 @@ export function lastGammaGammaQuantileIterations(): number {
  * @see Al-Habash, Andrews & Phillips (2001); DOMAIN §6.7.
  */
 export function fadeMarginGammaGammaDb(alpha: number, beta: number, probability: number): number {
-  return -10 * Math.log10(gammaGammaQuantile(alpha, beta, probability));
+  const margin = -10 * Math.log10(gammaGammaQuantile(alpha, beta, probability));
+  return margin === 0 ? 0 : margin; // no −0 for a non-fluctuating beam
 }
 
 /**
@@ -350,6 +356,38 @@ export function fadeMarginLognormalDb(scintillationIndex: number, probability: n
   const logVariance = Math.log1p(scintillationIndex);
   const logThreshold = -logVariance / 2 + Math.sqrt(logVariance) * normalQuantile(probability, 0, 1);
   return -DB_PER_NATURAL_LOG_POWER * logThreshold;
+}
+
+/**
+ * Log-normal irradiance CDF with ⟨I⟩ = 1: ln I ~ N(−σ²/2, σ²), σ² = ln(1 + σ_I²).
+ *
+ * @param x normalised irradiance I/⟨I⟩ ≥ 0
+ * @param scintillationIndex σ_I² > 0
+ * @returns P(I/⟨I⟩ < x) in [0, 1]
+ * @see Andrews & Phillips (2005), ch. 11 (log-normal model, weak fluctuations) [from memory].
+ */
+export function lognormalIrradianceCdf(x: number, scintillationIndex: number): number {
+  requirePositive('scintillationIndex', scintillationIndex);
+  if (!(x >= 0)) throw new RangeError(`x: must be 0 or more (got ${x})`);
+  if (x === 0) return 0;
+  const logVariance = Math.log1p(scintillationIndex);
+  return 0.5 * erfc(-(Math.log(x) + logVariance / 2) / Math.sqrt(2 * logVariance));
+}
+
+/**
+ * Log-normal irradiance pdf with ⟨I⟩ = 1.
+ *
+ * @param x normalised irradiance I/⟨I⟩ > 0
+ * @param scintillationIndex σ_I² > 0
+ * @returns f(x) ≥ 0
+ * @see Andrews & Phillips (2005), ch. 11 [from memory].
+ */
+export function lognormalIrradiancePdf(x: number, scintillationIndex: number): number {
+  requirePositive('x', x);
+  requirePositive('scintillationIndex', scintillationIndex);
+  const logVariance = Math.log1p(scintillationIndex);
+  const u = Math.log(x) + logVariance / 2;
+  return Math.exp((-u * u) / (2 * logVariance)) / (x * Math.sqrt(2 * Math.PI * logVariance));
 }
 
 /** Input of {@link fadeMarginDb}: gamma-gamma parameters or a log-normal scintillation index. */

@@ -9,6 +9,8 @@ import {
   gammaGammaQuantile,
   gammaGammaQuantileWithStop,
   lastGammaGammaQuantileIterations,
+  lognormalIrradianceCdf,
+  lognormalIrradiancePdf,
 } from './fade-statistics.js';
 import {
   GAUSSIAN_BEAM_RYTOV_FORM_RATIO,
@@ -151,6 +153,19 @@ describe('gamma-gamma statistics and fade margin', () => {
     const gg = fadeMarginDb({ model: 'gamma-gamma', alpha, beta, probability: 1e-3 });
     const ln = fadeMarginDb({ model: 'lognormal', scintillationIndex, probability: 1e-3 });
     expect(gg - ln).toBeGreaterThan(4);
+  });
+
+  it('handles a non-fluctuating factor (infinite shape) and zero turbulence', () => {
+    const { alpha, beta } = gammaGammaParameters({ rytovVariance: 0, wave: 'spherical' });
+    expect(fadeMarginDb({ model: 'gamma-gamma', alpha, beta, probability: 1e-3 })).toBe(0);
+    // With α → ∞ the law is Gamma(β, 1/β): compare with a very large α.
+    expect(fadeMarginDb({ model: 'gamma-gamma', alpha: Infinity, beta: 3, probability: 1e-3 })).toBeCloseTo(fadeMarginDb({ model: 'gamma-gamma', alpha: 1e6, beta: 3, probability: 1e-3 }), 3);
+  });
+
+  it('log-normal CDF at the log-normal fade threshold equals p', () => {
+    const threshold = Math.pow(10, -fadeMarginDb({ model: 'lognormal', scintillationIndex: 0.3, probability: 1e-4 }) / 10);
+    expect(lognormalIrradianceCdf(threshold, 0.3) / 1e-4).toBeCloseTo(1, 9);
+    expect(lognormalIrradiancePdf(1, 0.3)).toBeGreaterThan(0);
   });
 
   it('rejects probabilities outside (0, 1)', () => {
