@@ -32,6 +32,80 @@ export type { LinkBudget, BudgetTerm, BudgetCheck, BudgetTermKey } from './schem
 export { formatZodIssues } from './schemas/format-zod-issues.js';
 export type { FieldIssue } from './schemas/format-zod-issues.js';
 
+// Units and conversions (mathjs-based parsing of user entry lives in the ./units subpath)
+export { widthOverOneOverESquaredRadius, convertBeamWidth, beamWidthDefinitionRatio, fullAngleToHalfAngleRad, halfAngleToFullAngleRad, radiansToDegrees, degreesToRadians } from './units/beam-width.js';
+export type { BeamWidthDefinition, BeamWidthExtent, BeamWidth } from './units/beam-width.js';
+export { DB_PER_NATURAL_LOG_POWER, WGS84_ELLIPSOID, GRS80_ELLIPSOID, MEAN_EARTH_RADIUS_M, DEFAULT_REFRACTION_COEFFICIENT } from './units/constants.js';
+export type { Ellipsoid } from './units/constants.js';
+export { ratioToDb, dbToRatio, fractionToLossDb, wattsToDbm, dbmToWatts } from './units/decibels.js';
+
+// Gaussian beams (DOMAIN §1)
+export { rayleighRangeM, diffractionHalfAngleRad, beamRadiusFromWaistM, wavefrontRadiusFromWaistM, gouyPhaseRad, gaussianBeam } from './beam/gaussian-beam.js';
+export type { GaussianBeamInput, GaussianBeam } from './beam/gaussian-beam.js';
+export { gaussianPeakIntensityWPerM2, relativeIntensity, gaussianIntensityWPerM2, encircledPowerFraction } from './beam/intensity.js';
+export { andrewsPhillipsBeamParameters, defocusedLaunch, launchBeamRadiusAtRangeM, beamRadiusAtRangeM, linearSpotRadiusM, quadratureSpotRadiusM } from './beam/launch.js';
+export type { LaunchedBeamInput, AndrewsPhillipsParameters, DefocusedLaunchInput, DefocusedLaunch, BeamRadiusAtRangeInput } from './beam/launch.js';
+
+// Transmit aperture (DOMAIN §2)
+export { truncationGainEfficiency, transmittedFraction, optimumTruncation, uniformApertureGain, truncatedGaussianGain, fraunhoferDistanceM, onAxisFarFieldIrradianceWPerM2, gaussianBeamOnAxisGain, friisPowerRatio, transmitApertureForSpot } from './transmit/truncation.js';
+export type { OptimumTruncation, TransmitApertureForSpotInput, TransmitApertureForSpot } from './transmit/truncation.js';
+
+// Receive capture (DOMAIN §3)
+export { centredCaptureFraction, annularCaptureFraction, offsetCaptureFraction, captureFraction, geometricLossDb, smallApertureCaptureApproximation, faridHranilovicCapture, faridHranilovicCaptureFraction, topHatCaptureRatio, offsetForRelativeCapture, fieldOfViewCheck } from './capture/capture.js';
+export type { CaptureFractionInput, FaridHranilovicCapture, TopHatCaptureInput, FieldOfViewInput, FieldOfViewCheck } from './capture/capture.js';
+
+// Pointing, jitter and building sway (DOMAIN §4)
+export { pointingOutageProbability, rayleighThresholdOverSigma, requiredThresholdOverSigma, meanPointingRelativePower, meanPointingLossDb, pointingLossDb, angularPointingLossDb, offsetForPointingLossM, pointingJitterBudget, pointingLossAtOutageDb, faridHranilovicPointingStatistics, faridHranilovicOutageProbability, combineJitterPerAxis } from './pointing/pointing.js';
+export type { PointingOutageInput, PointingJitterBudgetInput, PointingJitterBudget, FaridHranilovicPointingStatistics } from './pointing/pointing.js';
+export { buildingFundamentalFrequencyHz, buildingTiltEstimates } from './pointing/building-sway.js';
+export type { BuildingTiltInput, BuildingTiltEstimates } from './pointing/building-sway.js';
+
+// Atmospheric attenuation (DOMAIN §5)
+export { KOSCHMIEDER_CONSTANT_2_PERCENT, VISIBILITY_REFERENCE_WAVELENGTH_M, VISIBILITY_2_PERCENT_PER_MOR, koschmiederConstant, toContrast2PercentVisibilityM, kimExponent, kruseExponent, visibilityExponent, visibilityExtinctionPerKm, visibilityExtinctionPerKmFast, visibilityAttenuationDbPerKm, visibilityForAttenuationM, visibility2PercentForAttenuationKm } from './atmosphere/visibility-attenuation.js';
+export type { VisibilityModel, VisibilityAttenuationInput, VisibilityForAttenuationInput } from './atmosphere/visibility-attenuation.js';
+export { alNaboulsiFogExtinctionPerKm, alNaboulsiFogAttenuationDbPerKm, rainAttenuationDbPerKm, snowAttenuationDbPerKm, clearAirAbsorptionDbPerKm, atmosphericPathLoss } from './atmosphere/fog-and-precipitation.js';
+export type { FogType, AlNaboulsiFogInput, RainModel, SnowType, AtmosphericPathLoss } from './atmosphere/fog-and-precipitation.js';
+export { VISIBILITY_CODE, visibilityCodeClass } from './atmosphere/visibility-code.js';
+export type { VisibilityCodeClass } from './atmosphere/visibility-code.js';
+
+// Turbulence (DOMAIN §6)
+export { wavenumberRadPerM, rytovVariance, rytovVarianceFast, fresnelZoneM, coherenceRadiusM, friedParameterM, turbulenceRegime } from './turbulence/rytov.js';
+export type { WaveModel, RytovVarianceInput, CoherenceInput, TurbulenceRegime } from './turbulence/rytov.js';
+export { normalisedApertureSquared, gammaGammaParameters, scintillationIndexAllRegimes, apertureAveragedScintillationIndex, weakApertureAveraging, weakApertureAveragingNumerical, apertureAveragedFadeMarginDb, apertureAveragedScintillationIndexFast } from './turbulence/scintillation.js';
+export type { GammaGammaParameters, GammaGammaParametersInput, WeakApertureAveraging } from './turbulence/scintillation.js';
+export { GAMMA_GAMMA_LOGNORMAL_SHAPE_LIMIT, gammaGammaCdf, gammaGammaPdf, gammaGammaCdfSeries, gammaGammaQuantile, fadeMarginGammaGammaDb, fadeMarginLognormalDb, fadeMarginDb } from './turbulence/fade-statistics.js';
+export type { FadeMarginInput } from './turbulence/fade-statistics.js';
+export { GAUSSIAN_BEAM_RYTOV_FORM_RATIO, gaussianBeamRytovRatioIntegral, gaussianBeamRytovRatio, gaussianBeamRytovRatioApproximate, gaussianBeamScintillationIndex } from './turbulence/gaussian-beam-scintillation.js';
+export { collimatedBeamWander, longTermBeamRadius } from './turbulence/beam-wander.js';
+export type { BeamWander, LongTermBeamRadius } from './turbulence/beam-wander.js';
+
+// Receiver (DOMAIN §7)
+export { PLANCK_CONSTANT_J_S, SPEED_OF_LIGHT_M_PER_S, ELEMENTARY_CHARGE_C, qFactorForBer, berForQFactor, qFactorDb, photonEnergyJ, photonsPerBit, idealResponsivityAPerW, receiverSensitivity, checkReceivedPower } from './receiver/sensitivity.js';
+export type { ReceiverSensitivityInput, ReceiverSensitivity, ReceivedPowerVerdict } from './receiver/sensitivity.js';
+
+// Eye safety (DOMAIN §11): indicative only, always shown with its caution
+export { DEFAULT_LASER_SAFETY_EDITION, normaliseLaserSafetyEdition, eyeSafetyCaution, correctionFactorC4, correctionFactorC7, ocularMpeDetails, ocularMpeWPerM2, ocularMpeRadiantExposureJPerM2, limitingApertureDiameterM, mpePowerThroughLimitingApertureW, CLASS_3B_CW_LIMIT_W, classOneAel, classOneAelW } from './safety/exposure-limits.js';
+export type { LaserSafetyEdition, LaserSafetyEditionInput, OcularMpeInput, OcularMpeDetails, ClassOneAel } from './safety/exposure-limits.js';
+export { BINOCULAR_7X50_GAIN, viewingOpticsGain, nohdM, nohdFarFieldM, exitPeakIrradianceWPerM2 } from './safety/hazard-distance.js';
+export type { NohdInput } from './safety/hazard-distance.js';
+export { accessiblePowerW, measurementConditions, indicativeLaserClass, assessEyeSafety } from './safety/classification.js';
+export type { BeamGrowthModel, AccessiblePowerInput, MeasurementCondition, IndicativeLaserClass, LaserClassInput, LaserClassIndication, EyeSafetyInput, EyeSafetyAssessment } from './safety/classification.js';
+
+// Site geometry (DOMAIN §12)
+export { linkGeometry, earthCurvature, surveyingCurvatureRefractionDropM, earthBulgeM, fresnelRadiusM, lineOfSightClearance } from './geometry/link-geometry.js';
+export type { Site, LinkGeometryInput, LinkGeometry, EarthCurvature, PathObstacle, ClearanceBeam, LineOfSightClearanceInput, ObstacleClearance, LineOfSightClearance } from './geometry/link-geometry.js';
+export { normaliseAzimuthDeg, geodesicInverse, geodeticToEcef, enuVector, formatDegreesMinutesSeconds, parseDegreesMinutesSeconds } from './geometry/geodesy.js';
+export type { GeodesicInverse, Ecef, Enu } from './geometry/geodesy.js';
+
+// Numerical building blocks
+export { noncentralChiSquare2Tails, marcumQ1, marcumQ1Complement } from './numeric/marcum-q.js';
+export type { NoncentralChiSquareTails } from './numeric/marcum-q.js';
+export { findRootBrent } from './numeric/root-finding.js';
+export type { RootFindingOptions } from './numeric/root-finding.js';
+export { integrate } from './numeric/quadrature.js';
+export type { QuadratureOptions } from './numeric/quadrature.js';
+export { besselI0Scaled } from './numeric/bessel.js';
+
 // Link budget (DOMAIN §8–§10)
 export { evaluateLink, linkMarginAtRangeDb } from './budget/evaluate-link.js';
 export { maxRange, maxRangeM, MAX_RANGE_SEARCH_M } from './budget/max-range.js';
