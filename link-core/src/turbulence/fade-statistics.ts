@@ -107,6 +107,8 @@ function quadraturePass(x: number, m: number, a: number, lnGammaM: number, lnGam
         peakS = s;
       }
       if (size < RELATIVE_CUTOFF * peak && size <= previous) break;
+      // Underflow beyond the right tail of the density (X = e^s > e): nothing more to find that way.
+      if (size === 0 && direction === 1 && s > 1) break;
       previous = size;
     }
   }
