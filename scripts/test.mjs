@@ -22,7 +22,8 @@ import {
 
 const SUITE_TIMEOUT_MS = 12 * 60_000;
 const only = process.env.TEST_ONLY ? new Set(process.env.TEST_ONLY.split(',').map((name) => name.trim())) : undefined;
-const selected = (key) => !only || only.has(key);
+// Nothing new starts once Ctrl-C was pressed (see the signal handlers below).
+const selected = (key) => !interrupted && (!only || only.has(key));
 
 /** @type {{ key: string, name: string, passed: number, failed: number, skipped: number, seconds: number, note: string }[]} */
 const results = [];
@@ -31,6 +32,7 @@ const workDir = fs.mkdtempSync(path.join(os.tmpdir(), 'bw-test-'));
 let cluster;
 let server;
 let cleanedUp = false;
+let interrupted = false;
 
 function record(key, name, { passed = 0, failed = 0, skipped = 0, durationMs = 0, note = '' }) {
   const row = { key, name, passed, failed, skipped, seconds: durationMs / 1000, note };
@@ -143,8 +145,12 @@ async function cleanUp() {
 
 for (const signal of ['SIGINT', 'SIGTERM', 'SIGHUP']) {
   process.on(signal, () => {
+    if (interrupted) return;
+    interrupted = true;
     process.stdout.write(`\n${signal} received: removing the throwaway database and stopping.\n`);
-    cleanUp().finally(() => process.exit(130));
+    // The main flow then skips every later suite, prints the summary and exits 130; this is the
+    // fallback should it be stuck.
+    cleanUp().finally(() => setTimeout(() => process.exit(130), 15_000).unref());
   });
 }
 
@@ -288,6 +294,7 @@ async function browserSuite(testEnv, wantedPort) {
     }
   }
 
+  if (interrupted) return;
   step(`Starting the server on 127.0.0.1:${serverPort} for the browser tests`);
   const baseUrl = `http://127.0.0.1:${serverPort}`;
   const serverLog = path.join(workDir, 'server.log');
@@ -324,6 +331,7 @@ try {
   record('runner', 'test runner', { failed: 1, note: error.message.split('\n')[0] });
 } finally {
   await cleanUp();
+  if (interrupted) record('runner', 'interrupted (Ctrl-C): later suites not run', { failed: 1 });
   failed = printSummary();
 }
-process.exit(failed > 0 ? 1 : 0);
+process.exit(interrupted ? 130 : failed > 0 ? 1 : 0);

@@ -80,6 +80,9 @@ export function step(message) {
  */
 export function runCommand(command, args, { cwd = ROOT_DIR, env = process.env, capture = false, quiet = false, timeoutMs, onSpawn } = {}) {
   const startedAt = Date.now();
+  if (refuseNewChildren) {
+    return Promise.resolve({ code: 130, output: '', timedOut: false, durationMs: 0, interrupted: true });
+  }
   return new Promise((resolve, reject) => {
     const child = spawn(command, args, {
       cwd, env, detached: true, stdio: ['ignore', capture || quiet ? 'pipe' : 'inherit', capture || quiet ? 'pipe' : 'inherit'],
@@ -105,14 +108,22 @@ export function runCommand(command, args, { cwd = ROOT_DIR, env = process.env, c
 }
 
 const runningChildren = new Set();
+let refuseNewChildren = false;
 
 /**
  * Ends every command started through runCommand that still runs, with its whole process group
- * (they are detached, so a Ctrl-C in the terminal reaches only us: we pass it on here).
+ * (they are detached, so a Ctrl-C in the terminal reaches only us: we pass it on here), and makes
+ * runCommand refuse new ones from then on, so that a script winding down starts nothing new.
  */
 export function killRunningChildren(signal = 'SIGTERM') {
+  refuseNewChildren = true;
   for (const child of runningChildren) killGroup(child, signal);
 }
+
+// Last resort: a detached child must never outlive us (process.kill is synchronous).
+process.on('exit', () => {
+  for (const child of runningChildren) killGroup(child, 'SIGKILL');
+});
 
 /** Sends a signal to a detached child's whole process group (falls back to the child alone). */
 export function killGroup(child, signal = 'SIGTERM') {
