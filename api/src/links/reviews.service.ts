@@ -2,19 +2,12 @@ import { ConflictException, ForbiddenException, Injectable } from '@nestjs/commo
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import { DataSource, Repository } from 'typeorm';
 import type { LinkStatus, ReviewAction, ReviewActionResponse, ReviewListResponse } from '@beamwright/link-core/contracts';
+import { REVIEW_TRANSITIONS } from './review-transitions.js';
 import type { AuthUser } from '../common/auth-user.js';
 import { toReviewEntry } from './link.mapper.js';
 import { LinkReview } from './link-review.entity.js';
 import { Link } from './link.entity.js';
 import { LinksService } from './links.service.js';
-
-/** Which status each action starts from and leads to. */
-const TRANSITIONS: Record<ReviewAction, { from: LinkStatus; to: LinkStatus; verb: string }> = {
-  submit: { from: 'draft', to: 'in_review', verb: 'submitted for review' },
-  approve: { from: 'in_review', to: 'approved', verb: 'approved' },
-  return: { from: 'in_review', to: 'draft', verb: 'returned' },
-  install: { from: 'approved', to: 'installed', verb: 'marked installed' },
-};
 
 const STATUS_WORDS: Record<LinkStatus, string> = {
   draft: 'a draft',
@@ -45,7 +38,7 @@ export class ReviewsService {
   async act(caller: AuthUser, linkId: string, revisionNumber: number, action: ReviewAction, comment: string): Promise<ReviewActionResponse> {
     const link = await this.links.findOwnedLink(caller, linkId);
     const revision = await this.links.findRevision(link.id, revisionNumber);
-    const transition = TRANSITIONS[action];
+    const transition = REVIEW_TRANSITIONS[action];
     if (revisionNumber !== link.latestRevision) {
       throw new ConflictException(`Revision ${revisionNumber} is not the latest (${link.latestRevision}); only the latest revision can be ${transition.verb}`);
     }

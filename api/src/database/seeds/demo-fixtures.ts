@@ -6,7 +6,7 @@ import { readFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { z } from 'zod';
 import { formatZodIssues } from '@beamwright/link-core';
-import { RoleSchema } from '@beamwright/link-core/contracts';
+import { CreateEquipmentRequestSchema, CreateSiteRequestSchema, REVIEW_ACTIONS, RoleSchema } from '@beamwright/link-core/contracts';
 import { CHECKOUT_ROOT } from '../../config/checkout-paths.js';
 
 export const DEMO_FIXTURES_DIR = resolve(CHECKOUT_ROOT, 'fixtures', 'demo');
@@ -15,6 +15,32 @@ const OrganisationFixtureSchema = z.object({ slug: z.string().min(1), name: z.st
 const UsersFixtureSchema = z.object({
   users: z.array(z.object({ email: z.email(), displayName: z.string().min(1), role: RoleSchema })).min(1),
 });
+const SitesFixtureSchema = z.object({
+  sites: z.array(CreateSiteRequestSchema.extend({ key: z.string().min(1) })),
+});
+const EquipmentFixtureSchema = z.object({ models: z.array(CreateEquipmentRequestSchema) });
+
+const daysAgo = z.number().min(0).max(3650);
+/** A design object; checked by LinkDesignSchema when the history is replayed (after merging changes). */
+const designObject = z.record(z.string(), z.unknown());
+const HistoryEventSchema = z.discriminatedUnion('type', [
+  z.object({ type: z.literal('revision'), daysAgo, author: z.email(), note: z.string(), design: designObject.optional(), changes: designObject.optional() }),
+  z.object({ type: z.literal('review'), daysAgo, action: z.enum(REVIEW_ACTIONS), actor: z.email(), comment: z.string() }),
+]);
+export type HistoryEvent = z.infer<typeof HistoryEventSchema>;
+
+const LinksFixtureSchema = z.object({
+  links: z.array(
+    z.object({
+      name: z.string().min(1),
+      siteA: z.string().nullable(),
+      siteB: z.string().nullable(),
+      owner: z.email(),
+      history: z.array(HistoryEventSchema).min(1),
+    }),
+  ),
+});
+export type LinkFixture = z.infer<typeof LinksFixtureSchema>['links'][number];
 
 export function readFixture<Schema extends z.ZodType>(directory: string, fileName: string, schema: Schema): z.output<Schema> {
   const path = join(directory, fileName);
@@ -30,6 +56,9 @@ export function readDemoFixtures(directory = DEMO_FIXTURES_DIR) {
   return {
     organisation: readFixture(directory, 'organisation.json', OrganisationFixtureSchema),
     users: readFixture(directory, 'users.json', UsersFixtureSchema).users,
+    sites: readFixture(directory, 'sites.json', SitesFixtureSchema).sites,
+    equipment: readFixture(directory, 'equipment.json', EquipmentFixtureSchema).models,
+    links: readFixture(directory, 'links.json', LinksFixtureSchema).links,
   };
 }
 export type DemoFixtures = ReturnType<typeof readDemoFixtures>;

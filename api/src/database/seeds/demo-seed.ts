@@ -3,22 +3,30 @@ import type { Role } from '@beamwright/link-core/contracts';
 import { Organisation } from '../../organisations/organisation.entity.js';
 import { User } from '../../users/user.entity.js';
 import { hashPassword, verifyPassword } from '../../users/password-hasher.js';
+import { EquipmentModel } from '../../equipment/equipment-model.entity.js';
+import { Link } from '../../links/link.entity.js';
+import { Site } from '../../sites/site.entity.js';
 import { readDemoFixtures, type DemoFixtures } from './demo-fixtures.js';
+import { seedDemoLink } from './demo-links.js';
 
 export interface SeedSummary {
   organisationId: string;
   usersCreated: number;
   usersUpdated: number;
+  sitesCreated: number;
+  equipmentCreated: number;
+  linksCreated: number;
 }
 
 /**
- * Seeds the fictional demo organisation and its people. Idempotent: it finds its organisation by
- * slug and users by e-mail, creates what is missing, and brings names, roles and the password
- * (from DEMO_PASSWORD) back to the fixture's values; it never deletes anything.
+ * Seeds the fictional demo organisation: people, sites, the equipment catalogue and links with
+ * their revision and review history. Idempotent: it finds its organisation by slug, users by
+ * e-mail, sites, models and links by name; creates what is missing; brings names, roles and the
+ * password (from DEMO_PASSWORD) back to the fixture's values; never deletes or rewrites a link.
  */
 export async function seedDemo(
   dataSource: DataSource,
-  { demoPassword, fixtures = readDemoFixtures() }: { demoPassword: string; fixtures?: DemoFixtures },
+  { demoPassword, fixtures = readDemoFixtures(), now = new Date() }: { demoPassword: string; fixtures?: DemoFixtures; now?: Date },
 ): Promise<SeedSummary> {
   return dataSource.transaction(async (manager) => {
     const organisation = await upsertOrganisation(manager, fixtures.organisation);
@@ -29,7 +37,39 @@ export async function seedDemo(
       if (outcome === 'created') usersCreated += 1;
       if (outcome === 'updated') usersUpdated += 1;
     }
-    return { organisationId: organisation.id, usersCreated, usersUpdated };
+    const userIds = new Map<string, string>();
+    for (const user of await manager.getRepository(User).find({ where: { organisationId: organisation.id } })) userIds.set(user.email, user.id);
+
+    let sitesCreated = 0;
+    const siteIds = new Map<string, string>();
+    for (const { key, ...site } of fixtures.sites) {
+      const repository = manager.getRepository(Site);
+      let row = await repository.findOne({ where: { organisationId: organisation.id, name: site.name } });
+      if (!row) {
+        row = await repository.save(repository.create({ ...site, organisationId: organisation.id }));
+        sitesCreated += 1;
+      }
+      siteIds.set(key, row.id);
+    }
+
+    let equipmentCreated = 0;
+    for (const model of fixtures.equipment) {
+      const repository = manager.getRepository(EquipmentModel);
+      const exists = await repository.exists({ where: { organisationId: organisation.id, kind: model.kind, name: model.name } });
+      if (!exists) {
+        await repository.save(repository.create({ ...model, organisationId: organisation.id, illustrative: true }));
+        equipmentCreated += 1;
+      }
+    }
+
+    let linksCreated = 0;
+    for (const link of fixtures.links) {
+      const exists = await manager.getRepository(Link).exists({ where: { organisationId: organisation.id, name: link.name } });
+      if (exists) continue;
+      await seedDemoLink(manager, { organisationId: organisation.id, userIds, siteIds, now }, link);
+      linksCreated += 1;
+    }
+    return { organisationId: organisation.id, usersCreated, usersUpdated, sitesCreated, equipmentCreated, linksCreated };
   });
 }
 

@@ -24,7 +24,9 @@ const dataSource = new DataSource(
 try {
   await dataSource.initialize();
   const summary = await seedDemo(dataSource, { demoPassword: env.DEMO_PASSWORD });
-  console.log(`Demo seeded: organisation ${summary.organisationId}, ${summary.usersCreated} users created, ${summary.usersUpdated} updated`);
+  console.log(
+    `Demo seeded (organisation ${summary.organisationId}): created ${summary.usersCreated} users, ${summary.sitesCreated} sites, ${summary.equipmentCreated} equipment models, ${summary.linksCreated} links; updated ${summary.usersUpdated} users`,
+  );
 } catch (error) {
   console.error(`Seeding failed: ${error instanceof Error ? error.message : String(error)}`);
   process.exitCode = 1;
