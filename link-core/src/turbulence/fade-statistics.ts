@@ -73,7 +73,7 @@ function quadraturePass(x: number, m: number, a: number, lnGammaM: number, lnGam
           denominator += 1;
           term *= y / denominator;
           sum += term;
-          if (term < sum * 1e-17) break;
+          if (term < sum * 1e-14) break;
         }
         cdfTerm = (e / a) * sum;
       } else {
@@ -93,7 +93,7 @@ function quadraturePass(x: number, m: number, a: number, lnGammaM: number, lnGam
           d = 1 / d;
           const delta = d * c;
           fraction *= delta;
-          if (Math.abs(delta - 1) < 1e-16) break;
+          if (Math.abs(delta - 1) < 1e-14) break;
         }
         cdfTerm = Math.exp(logDensity) - e * fraction;
       }
