@@ -98,6 +98,7 @@ export function kruseExponent(visibilityKm: number): number {
  * @param model `kim` or `kruse`
  * @param visibilityKm 2 % visibility [km], > 0
  * @returns q, dimensionless
+ * @see Kim, McArthur & Korevaar (2001); Kruse, McGlauchlin & McQuistan (1962).
  */
 export function visibilityExponent(model: VisibilityModel, visibilityKm: number): number {
   return model === 'kruse' ? kruseExponent(visibilityKm) : kimExponent(visibilityKm);
@@ -142,6 +143,7 @@ export function visibilityExtinctionPerKm(input: VisibilityAttenuationInput): nu
  * @param wavelengthM vacuum wavelength [m], > 0
  * @param koschmiederConstantValue K (3.91 in the sources)
  * @returns β [1/km]
+ * @see Kim, McArthur & Korevaar, Proc. SPIE 4214 (2001), eq. 2–3; Kruse et al. (1962).
  */
 export function visibilityExtinctionPerKmFast(kruse: boolean, visibilityKm: number, wavelengthM: number, koschmiederConstantValue = KOSCHMIEDER_CONSTANT_2_PERCENT): number {
   const q = kruse ? kruseExponent(visibilityKm) : kimExponent(visibilityKm);
@@ -212,6 +214,7 @@ export function visibilityForAttenuationM(input: VisibilityForAttenuationInput):
  * @param attenuationDbPerKm target γ [dB/km], > 0
  * @param koschmiederConstantValue K (3.91)
  * @returns V [km] in [0.001, 1000]
+ * @see Kim & Korevaar, Proc. SPIE 4530 (2001) (V_min for availability); bisection is common practice.
  */
 export function visibility2PercentForAttenuationKm(kruse: boolean, wavelengthM: number, attenuationDbPerKm: number, koschmiederConstantValue = KOSCHMIEDER_CONSTANT_2_PERCENT): number {
   let lo = Math.log10(INVERSE_VISIBILITY_MIN_M / 1000);

@@ -23,6 +23,7 @@ export type LaserSafetyEditionInput = LaserSafetyEdition | '2007' | '2014' | 200
  *
  * @param edition `'IEC 60825-1:2007'`, `'IEC 60825-1:2014'`, `2007`, `2014`, `'2007'` or `'2014'`; default 2007
  * @returns the full edition name
+ * @see IEC 60825-1:2007 (Ed. 2) and IEC 60825-1:2014 (Ed. 3).
  */
 export function normaliseLaserSafetyEdition(edition?: LaserSafetyEditionInput): LaserSafetyEdition {
   if (edition === undefined) return DEFAULT_LASER_SAFETY_EDITION;
@@ -37,6 +38,8 @@ export function normaliseLaserSafetyEdition(edition?: LaserSafetyEditionInput): 
  *
  * @param edition the IEC 60825-1 edition whose limits were applied
  * @returns the caution text
+ * @see IEC 60825-1 and IEC 60825-12 (classification under single-fault conditions; FSO installations);
+ *   common practice (deferring to a laser safety officer).
  */
 export function eyeSafetyCaution(edition: LaserSafetyEdition): string {
   return (

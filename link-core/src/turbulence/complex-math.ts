@@ -3,7 +3,14 @@
  * Internal to the turbulence module.
  */
 
-/** Real part of Γ(−5/6)·[a^(5/6) − (a − i·b)^(5/6)] for a ≥ 0 (principal branch). */
+/**
+ * Real part of Γ(−5/6)·[a^(5/6) − (a − i·b)^(5/6)] for a ≥ 0 (principal branch): the kernel of the
+ * weak-fluctuation Rytov integrals with the Kolmogorov spectrum.
+ * @param a real part ≥ 0
+ * @param b imaginary offset
+ * @returns the kernel value (real)
+ * @see Andrews & Phillips (2005), ch. 8 and 10 (integrals over κ done in closed form) [derived].
+ */
 export function kolmogorovKernelReal(a: number, b: number): number {
   const modulus = Math.hypot(a, b);
   const argument = Math.atan2(-b, a);

@@ -212,7 +212,12 @@ export function gammaGammaCdfSeries(x: number, alpha: number, beta: number): num
 /** Diagnostics of the last quantile search. */
 let quantileIterations = 0;
 let startGuess = 0;
-/** Starting guess ln x0 of the last {@link gammaGammaQuantile} call (diagnostics). */
+/**
+ * Starting guess ln x0 of the last {@link gammaGammaQuantile} call (diagnostics for tests and benchmarks).
+ * @returns ln x0 (Cornish–Fisher estimate)
+ * @see Cornish E.A., Fisher R.A., "Moments and cumulants in the specification of distributions",
+ *   Revue de l'Institut International de Statistique 5, 307–320 (1937).
+ */
 export function lastGammaGammaQuantileStart(): number {
   return startGuess;
 }
@@ -248,6 +253,7 @@ const HALLEY_STOP_STEP = 2e-3;
  * @param probability p in (0, 1)
  * @param stopStep stop once a Halley step in ln x is below this size (e.g. 2e-3; 1e-13 for full convergence)
  * @returns I_T/⟨I⟩ > 0
+ * @see Al-Habash, Andrews & Phillips (2001); Halley's method (common practice).
  */
 export function gammaGammaQuantileWithStop(alpha: number, beta: number, probability: number, stopStep: number): number {
   if (Math.min(alpha, beta) > GAMMA_GAMMA_LOGNORMAL_SHAPE_LIMIT) {
@@ -320,12 +326,20 @@ export function gammaGammaQuantileWithStop(alpha: number, beta: number, probabil
   return Math.exp(t);
 }
 
-/** Nodes of the last quadrature pass (for tests and benchmarks). */
+/**
+ * Nodes of the last quadrature pass (diagnostics for tests and benchmarks).
+ * @returns node count
+ * @see common practice (diagnostics)
+ */
 export function lastQuadratureNodes(): number {
   return passNodes;
 }
 
-/** Number of quadrature passes used by the last {@link gammaGammaQuantile} call (for tests and benchmarks). */
+/**
+ * Number of quadrature passes used by the last {@link gammaGammaQuantile} call (diagnostics).
+ * @returns pass count (1 for weak or aperture-averaged scintillation)
+ * @see common practice (diagnostics)
+ */
 export function lastGammaGammaQuantileIterations(): number {
   return quantileIterations;
 }

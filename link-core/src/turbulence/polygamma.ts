@@ -6,7 +6,12 @@
  *   6.4.6 and 6.4.11 (recurrences and asymptotic expansions).
  */
 
-/** ψ(x), x > 0. */
+/**
+ * ψ(x) for x > 0.
+ * @param x argument, > 0
+ * @returns ψ(x)
+ * @see Abramowitz & Stegun (1964), §6.3–6.4.
+ */
 export function digamma(x: number): number {
   let result = 0;
   while (x < 8) {
@@ -17,7 +22,12 @@ export function digamma(x: number): number {
   return result + Math.log(x) - 0.5 / x - inv2 * (1 / 12 - inv2 * (1 / 120 - inv2 * (1 / 252 - inv2 * (1 / 240 - inv2 / 132))));
 }
 
-/** ψ′(x), x > 0. */
+/**
+ * ψ′(x) for x > 0.
+ * @param x argument, > 0
+ * @returns ψ′(x)
+ * @see Abramowitz & Stegun (1964), §6.3–6.4.
+ */
 export function trigamma(x: number): number {
   let result = 0;
   while (x < 8) {
@@ -29,7 +39,12 @@ export function trigamma(x: number): number {
   return result + inv + 0.5 * inv2 + inv * inv2 * (1 / 6 - inv2 * (1 / 30 - inv2 * (1 / 42 - inv2 / 30)));
 }
 
-/** ψ″(x), x > 0. */
+/**
+ * ψ″(x) for x > 0.
+ * @param x argument, > 0
+ * @returns ψ″(x)
+ * @see Abramowitz & Stegun (1964), §6.3–6.4.
+ */
 export function tetragamma(x: number): number {
   let result = 0;
   while (x < 8) {
@@ -41,7 +56,12 @@ export function tetragamma(x: number): number {
   return result - inv2 - inv2 * inv - 0.5 * inv2 * inv2 + inv2 * inv2 * inv2 * (1 / 6 - inv2 * (1 / 6 - inv2 * (3 / 10)));
 }
 
-/** ψ‴(x), x > 0. */
+/**
+ * ψ‴(x) for x > 0.
+ * @param x argument, > 0
+ * @returns ψ‴(x)
+ * @see Abramowitz & Stegun (1964), §6.3–6.4.
+ */
 export function pentagamma(x: number): number {
   let result = 0;
   while (x < 8) {

@@ -12,6 +12,7 @@ export type WaveModel = 'plane' | 'spherical';
  *
  * @param wavelengthM vacuum wavelength [m], > 0
  * @returns k [rad/m]
+ * @see common practice (definition of the wavenumber).
  */
 export function wavenumberRadPerM(wavelengthM: number): number {
   return (2 * Math.PI) / wavelengthM;
@@ -54,6 +55,7 @@ export function rytovVariance(input: RytovVarianceInput): number {
  * @param distanceM path length [m], > 0
  * @param spherical true for β0² (0.50), false for σ_R² (1.23)
  * @returns Rytov variance, dimensionless
+ * @see Andrews & Phillips (2005), ch. 8 [from memory].
  */
 export function rytovVarianceFast(cn2: number, wavelengthM: number, distanceM: number, spherical: boolean): number {
   const k = (2 * Math.PI) / wavelengthM;
