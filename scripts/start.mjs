@@ -6,57 +6,22 @@
 // Ctrl-C (or SIGTERM) stops the server, then the database (pg_ctl -m fast).
 
 import { spawn } from 'node:child_process';
-import fs from 'node:fs';
 import path from 'node:path';
 import {
   ensurePostgresBinaries, ensureRoleAndDatabase, initCluster, isClusterRunning, isPortInUse,
   resolveReachableDataDir, startCluster, stopCluster,
 } from './lib/postgres.mjs';
 import {
-  DATA_DIR, DEFAULT_ENV, DEMO_USERS, ROOT_DIR, buildWorkspaces, ensureNodeModules, isProcessAlive,
-  killRunningChildren, loadDotEnv, localJwtSecret, runCommand, step, waitForHealth,
+  DATA_DIR, DEFAULT_ENV, DEMO_USERS, ROOT_DIR, buildWorkspaces, ensureNodeModules, killRunningChildren,
+  loadDotEnv, localJwtSecret, runCommand, step, waitForHealth,
 } from './lib/project.mjs';
+import { acquireLock, releaseLock as releaseLockFile } from './lib/single-instance.mjs';
 
 const LOCK_FILE = path.join(DATA_DIR, 'start.lock');
 
 function fail(message) {
   process.stderr.write(`\n\u2716 ${message}\n`);
   process.exitCode = 1;
-}
-
-/** Takes the single-instance lock, or explains who holds it. Returns false when another runs. */
-function acquireLock(details) {
-  fs.mkdirSync(DATA_DIR, { recursive: true });
-  for (let attempt = 0; attempt < 2; attempt += 1) {
-    try {
-      const fd = fs.openSync(LOCK_FILE, 'wx', 0o644);
-      fs.writeSync(fd, `${JSON.stringify({ pid: process.pid, startedAt: new Date().toISOString(), ...details })}\n`);
-      fs.closeSync(fd);
-      return true;
-    } catch (error) {
-      if (error.code !== 'EEXIST') throw error;
-      let holder = {};
-      try {
-        holder = JSON.parse(fs.readFileSync(LOCK_FILE, 'utf8'));
-      } catch { /* unreadable: treat as stale */ }
-      if (isProcessAlive(holder.pid)) {
-        fail(
-          `Beamwright is already running from this checkout (pid ${holder.pid}, since ${holder.startedAt}` +
-            `${holder.url ? `, at ${holder.url}` : ''}).\n  Use that one, or stop it first (Ctrl-C in its terminal, or: kill -INT ${holder.pid}).`,
-        );
-        return false;
-      }
-      fs.rmSync(LOCK_FILE, { force: true }); // left by a run that was killed hard
-    }
-  }
-  return false;
-}
-
-function releaseLock() {
-  try {
-    const holder = JSON.parse(fs.readFileSync(LOCK_FILE, 'utf8'));
-    if (holder.pid === process.pid) fs.rmSync(LOCK_FILE, { force: true });
-  } catch { /* nothing to release */ }
 }
 
 async function main() {
@@ -66,7 +31,16 @@ async function main() {
   const url = `http://${env.HOST === '0.0.0.0' ? '127.0.0.1' : env.HOST}:${env.PORT}`;
   const databasePort = Number(env.DATABASE_PORT);
 
-  if (!acquireLock({ url, databasePort })) return;
+  const lock = acquireLock(LOCK_FILE, { url, databasePort });
+  if (!lock.acquired) {
+    const { holder } = lock;
+    fail(
+      `Beamwright is already running from this checkout (pid ${holder.pid}, since ${holder.startedAt}` +
+        `${holder.url ? `, at ${holder.url}` : ''}).\n  Use that one, or stop it first (Ctrl-C in its terminal, or: kill -INT ${holder.pid}).`,
+    );
+    return;
+  }
+  const releaseLock = () => releaseLockFile(LOCK_FILE);
 
   let server;
   let cluster; // { binDir, clusterDir } once the database runs
@@ -181,6 +155,6 @@ async function main() {
 
 main().catch((error) => {
   fail(error.stack ?? String(error));
-  releaseLock();
+  releaseLockFile(LOCK_FILE);
   process.exit(1);
 });

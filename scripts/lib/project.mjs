@@ -135,9 +135,43 @@ export function killGroup(child, signal = 'SIGTERM') {
   }
 }
 
-/** `npm ci` when node_modules is missing (a fresh clone). */
+/**
+ * Names of packages whose installed version differs from package-lock.json (or that the lockfile
+ * wants and node_modules lacks), read from npm's own record of the install
+ * (node_modules/.package-lock.json). Optional platform packages that were skipped do not count.
+ */
+export function lockfileDrift() {
+  try {
+    const wanted = JSON.parse(fs.readFileSync(path.join(ROOT_DIR, 'package-lock.json'), 'utf8')).packages;
+    const installed = JSON.parse(fs.readFileSync(path.join(ROOT_DIR, 'node_modules', '.package-lock.json'), 'utf8')).packages;
+    const drift = [];
+    for (const [key, entry] of Object.entries(wanted)) {
+      if (!key.startsWith('node_modules/') || entry.optional || entry.peer) continue;
+      if (installed[key]?.version !== entry.version) drift.push(key.slice('node_modules/'.length));
+    }
+    for (const key of Object.keys(installed)) if (!wanted[key]) drift.push(key.slice('node_modules/'.length));
+    return drift;
+  } catch {
+    return [];
+  }
+}
+
+/**
+ * `npm ci` when node_modules is missing (a fresh clone). When it exists but no longer matches the
+ * lockfile (after a pull), says so and leaves it alone: deleting a working node_modules is the
+ * developer's call, not a side effect of starting the app.
+ */
 export async function ensureNodeModules() {
-  if (fs.existsSync(path.join(ROOT_DIR, 'node_modules', '.package-lock.json'))) return false;
+  if (fs.existsSync(path.join(ROOT_DIR, 'node_modules', '.package-lock.json'))) {
+    const drift = lockfileDrift();
+    if (drift.length) {
+      process.stdout.write(
+        `\n! node_modules does not match package-lock.json (${drift.length} package(s), e.g. ${drift.slice(0, 3).join(', ')}).\n` +
+          '  If something fails below, run `npm ci` and try again.\n',
+      );
+    }
+    return false;
+  }
   step('node_modules is missing: installing the locked dependencies (npm ci, 1-3 minutes)');
   const result = await runCommand('npm', ['ci', '--no-audit', '--no-fund'], { env: { ...process.env, npm_config_loglevel: 'warn' } });
   if (result.code !== 0) throw new Error(`npm ci failed with exit code ${result.code}`);
@@ -241,17 +275,6 @@ export async function waitForHealth(url, { child, timeoutMs = 60_000, accept = (
     await new Promise((resolve) => setTimeout(resolve, 300));
   }
   throw new Error(`${url} did not report healthy within ${Math.round(timeoutMs / 1000)} s (last: ${last})`);
-}
-
-/** True when process `pid` is alive (signal 0 checks without touching it). */
-export function isProcessAlive(pid) {
-  if (!Number.isInteger(pid) || pid <= 0) return false;
-  try {
-    process.kill(pid, 0);
-    return true;
-  } catch (error) {
-    return error.code === 'EPERM';
-  }
 }
 
 /** Path of chromium used by the browser tests. */
