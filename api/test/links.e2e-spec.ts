@@ -263,6 +263,22 @@ describe('links and immutable revisions (e2e)', () => {
     await http().delete(`/api/sites/${siteB.id}`).set(...bearer(admin)).expect(409);
   });
 
+  it('renames a link and moves its ends without a new revision', async () => {
+    const admin = org.members.admin;
+    const site = (await http().post('/api/sites').set(...bearer(admin)).send({ name: 'Granary loft', latitudeDeg: 2, longitudeDeg: 2, groundElevationM: 7, mountHeightM: 11 }).expect(201)).body;
+    const link = await createLink('Unnamed hop');
+    const patched = await http().patch(`/api/links/${link.id}`).set(...bearer(org.members.engineer)).send({ name: 'Granary hop', siteAId: site.id }).expect(200);
+    expect(LinkDetailSchema.parse(patched.body)).toMatchObject({ name: 'Granary hop', revision: 1, siteA: { id: site.id, name: 'Granary loft' }, siteB: null });
+    const cleared = await http().patch(`/api/links/${link.id}`).set(...bearer(org.members.engineer)).send({ siteAId: null }).expect(200);
+    expect(cleared.body).toMatchObject({ name: 'Granary hop', siteA: null });
+    const same = await http().patch(`/api/links/${link.id}`).set(...bearer(org.members.engineer)).send({ siteAId: site.id, siteBId: site.id }).expect(400);
+    expect(same.body.issues).toEqual([{ path: 'siteBId', message: 'must be a different site from siteAId' }]);
+    const renamedSite = await http().patch(`/api/sites/${site.id}`).set(...bearer(admin)).send({ mountHeightM: 13.5, notes: 'new mast' }).expect(200);
+    expect(renamedSite.body).toMatchObject({ name: 'Granary loft', mountHeightM: 13.5, notes: 'new mast' });
+    const badSite = await http().patch(`/api/sites/${site.id}`).set(...bearer(admin)).send({ latitudeDeg: 95 }).expect(400);
+    expect(badSite.body.issues).toEqual([{ path: 'latitudeDeg', message: 'must be at most 90' }]);
+  });
+
   it('evaluates a design without storing it, with the same numbers as link-core', async () => {
     const response = await http().post('/api/evaluate').set(...bearer(org.members.installer)).send({ design: workedExampleDesign() }).expect(200);
     expect(response.body).toStrictEqual(asJson(evaluateLink(LinkDesignSchema.parse(workedExampleDesign()))));
