@@ -32,7 +32,14 @@ export function configureApp(app: INestApplication): void {
     app,
     new DocumentBuilder()
       .setTitle('Beamwright API')
-      .setDescription('Design, review and commission free-space optical links. Errors: { statusCode, error, message, issues? }.')
+      .setDescription(
+        [
+          'Design, review and commission free-space optical links. SI units (metres, radians, watts); powers in dBm and losses in dB are named so.',
+          'Errors answer { statusCode, error, message, issues? }: 400 lists each invalid field by dotted path (e.g. design.transmitter.wavelengthM);',
+          'a path id that is not a UUID is a 400, an id that does not exist or belongs to another organisation is a 404; a save on a stale baseRevision is a 409 carrying the latest revision.',
+          'Laser safety: transmit powers and any eye-safety figures are indicative, not a certification; the applicable laser-safety standard, local rules and a qualified laser safety officer decide.',
+        ].join(' '),
+      )
       .setVersion('0.1.0')
       .addBearerAuth()
       .build(),
