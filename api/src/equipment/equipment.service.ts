@@ -1,7 +1,6 @@
-import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
+import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { Repository } from 'typeorm';
-import { formatZodIssues } from '@beamwright/link-core';
 import {
   ReceiverSpecSchema,
   TransmitterSpecSchema,
@@ -12,6 +11,7 @@ import {
 } from '@beamwright/link-core/contracts';
 import type { z } from 'zod';
 import type { AuthUser } from '../common/auth-user.js';
+import { ZodValidationPipe } from '../common/pipes/zod-validation.pipe.js';
 import { EquipmentModel } from './equipment-model.entity.js';
 import { toEquipmentResponse } from './equipment.mapper.js';
 
@@ -41,12 +41,7 @@ export class EquipmentService {
     if (changes.spec !== undefined) {
       // the spec must fit the model's kind, which never changes
       const schema = model.kind === 'transmitter' ? TransmitterSpecSchema : ReceiverSpecSchema;
-      const parsed = schema.safeParse(changes.spec);
-      if (!parsed.success) {
-        const issues = formatZodIssues(parsed.error).map((issue) => ({ path: issue.path ? `spec.${issue.path}` : 'spec', message: issue.message }));
-        throw new BadRequestException({ message: `${issues[0]!.path} ${issues[0]!.message}`, issues });
-      }
-      model.spec = parsed.data;
+      model.spec = new ZodValidationPipe(schema, 'spec').transform(changes.spec);
     }
     if (changes.name !== undefined) model.name = changes.name;
     if (changes.maker !== undefined) model.maker = changes.maker;
