@@ -5,6 +5,8 @@
  */
 import gammainc from '@stdlib/math-base-special-gammainc';
 import gammaln from '@stdlib/math-base-special-gammaln';
+import { besselI0Scaled } from './bessel.js';
+import { integrate } from './quadrature.js';
 
 /** Both tails of the noncentral chi-square (2 degrees of freedom) at one point. */
 export interface NoncentralChiSquareTails {
@@ -45,18 +47,34 @@ function poissonMixture(mu: number, y: number, upper: boolean): number {
   return sum;
 }
 
+// The Rice density is about 1σ wide: split long intervals into panels of at most 2σ so that no
+// narrow peak can fall between the nodes of a single coarse panel.
+function integrateInUnitPanels(density: (t: number) => number, lower: number, upper: number): number {
+  if (!(upper > lower)) return 0;
+  const panels = Math.ceil((upper - lower) / 2);
+  const width = (upper - lower) / panels;
+  let sum = 0;
+  for (let i = 0; i < panels; i++) {
+    sum += integrate(density, lower + i * width, i === panels - 1 ? upper : lower + (i + 1) * width, { absoluteTolerance: 0, relativeTolerance: 1e-14 });
+  }
+  return sum;
+}
+
 /**
  * Both tails of the noncentral chi-square distribution with 2 degrees of freedom.
  *
  * Uses the Poisson mixture X ~ χ²(2 + 2J), J ~ Poisson(λ/2):
  * cdf = Σ_j e^(−λ/2)(λ/2)^j/j! · P(j+1, x/2). The smaller tail is summed directly (with the upper
  * regularized gamma for the survival function), so tails down to ~1e-300 keep full relative precision.
+ * For λ/2 > 300 the Rice density is integrated numerically instead (same tails, bounded work), and
+ * tails certain to be below ~1e-320 are returned as exactly 0 or 1.
  *
  * @param x evaluation point, ≥ 0 (dimensionless)
  * @param noncentrality λ ≥ 0 (dimensionless)
  * @returns `{ cdf, sf }`, each in [0, 1]
  * @see Johnson N.L., Kotz S., Balakrishnan N., "Continuous Univariate Distributions", vol. 2,
- *   2nd ed., Wiley (1995), ch. 29, eq. 29.2 (Poisson mixture).
+ *   2nd ed., Wiley (1995), ch. 29 (Poisson-mixture representation of the noncentral chi-square);
+ *   Rice S.O., Bell Syst. Tech. J. 24, 46–156 (1945) (Rice density).
  */
 export function noncentralChiSquare2Tails(x: number, noncentrality: number): NoncentralChiSquareTails {
   if (!(x >= 0) || !(noncentrality >= 0)) throw new RangeError('noncentralChiSquare2Tails: x and noncentrality must be ≥ 0');
@@ -64,8 +82,28 @@ export function noncentralChiSquare2Tails(x: number, noncentrality: number): Non
   if (x === Infinity) return { cdf: 1, sf: 0 };
   const mu = noncentrality / 2;
   const y = x / 2;
-  // The mean of X/2 is μ + 1: below it the cdf is the smaller tail.
-  if (y < mu + 1) {
+  // In Rician terms (offset a = sqrt(λ), radius b = sqrt(x), unit σ), |R − a| ≤ |V| with V a 2-D
+  // standard normal, so each tail beyond a distance d from a is below exp(−d²/2): past d² > 1490
+  // it underflows a double.
+  const distance = Math.sqrt(x) - Math.sqrt(noncentrality);
+  if (distance * distance > 1490) return distance > 0 ? { cdf: 1, sf: 0 } : { cdf: 0, sf: 1 };
+  const cdfIsSmaller = y < mu + 1; // the mean of X/2 is μ + 1
+  if (mu > 300) {
+    // Large offsets: the Poisson series would need gamma functions of order > 1000, where
+    // @stdlib/math-base-special-gammainc 0.3.1 was found to be wrong (P(1100, 1100) = 0.492 instead
+    // of 0.504), and hundreds of terms; integrate the Rice density
+    // t·exp(−(t − a)²/2)·i0e(a t) over the ±40σ band that holds all its mass instead.
+    const a = Math.sqrt(noncentrality);
+    const b = Math.sqrt(x);
+    const density = (t: number): number => t * Math.exp(-0.5 * (t - a) * (t - a)) * besselI0Scaled(a * t);
+    if (cdfIsSmaller) {
+      const cdf = Math.min(1, integrateInUnitPanels(density, Math.max(0, a - 40), b));
+      return { cdf, sf: 1 - cdf };
+    }
+    const sf = Math.min(1, integrateInUnitPanels(density, b, Math.max(a, b) + 40));
+    return { cdf: 1 - sf, sf };
+  }
+  if (cdfIsSmaller) {
     const cdf = Math.min(1, poissonMixture(mu, y, false));
     return { cdf, sf: 1 - cdf };
   }

@@ -30,8 +30,8 @@ export interface QuadratureOptions {
   absoluteTolerance?: number;
   /** Relative error target (default 1e-12). */
   relativeTolerance?: number;
-  /** Maximum bisection depth (default 50). */
-  maxDepth?: number;
+  /** Maximum number of panels (default 2000): bounds the work when the target cannot be met. */
+  maxPanels?: number;
 }
 
 function kronrodPanel(f: (x: number) => number, a: number, b: number): { value: number; error: number } {
@@ -50,30 +50,53 @@ function kronrodPanel(f: (x: number) => number, a: number, b: number): { value: 
 }
 
 /**
- * Integrates f over [a, b] by adaptive bisection of G7–K15 panels until each panel's
- * |K15 − G7| estimate meets its share of max(absoluteTolerance, relativeTolerance·|integral|).
+ * Integrates f over [a, b] with globally adaptive G7–K15 panels: the panel with the largest
+ * |K15 − G7| error estimate is bisected until the summed estimate meets
+ * max(absoluteTolerance, relativeTolerance·|integral|) or maxPanels is reached (then the best
+ * estimate so far is returned).
  *
  * @param f integrand, finite on [a, b] (any unit)
  * @param a lower limit (finite)
  * @param b upper limit (finite, may be below a: the sign follows)
+ * @param options tolerances and panel budget
  * @returns the integral (unit of f times unit of x)
  * @see Kronrod A.S., "Nodes and weights of quadrature formulas", Consultants Bureau (1965);
- *   Piessens R. et al., "QUADPACK", Springer (1983), routine QK15.
+ *   Piessens R. et al., "QUADPACK", Springer (1983), routines QK15 and QAG (global adaptivity).
  */
 export function integrate(f: (x: number) => number, a: number, b: number, options: QuadratureOptions = {}): number {
   if (a === b) return 0;
   if (!Number.isFinite(a) || !Number.isFinite(b)) throw new RangeError('integrate: limits must be finite');
   const absoluteTolerance = options.absoluteTolerance ?? 1e-14;
   const relativeTolerance = options.relativeTolerance ?? 1e-12;
-  const maxDepth = options.maxDepth ?? 50;
-  const whole = kronrodPanel(f, a, b);
-  const target = Math.max(absoluteTolerance, relativeTolerance * Math.abs(whole.value));
-  const refine = (lo: number, hi: number, panel: { value: number; error: number }, tolerance: number, depth: number): number => {
-    if (panel.error <= tolerance || depth >= maxDepth) return panel.value;
+  const maxPanels = options.maxPanels ?? 2000;
+  const lows: number[] = [a];
+  const highs: number[] = [b];
+  const first = kronrodPanel(f, a, b);
+  const values: number[] = [first.value];
+  const errors: number[] = [first.error];
+  let total = first.value;
+  let totalError = first.error;
+  while (totalError > Math.max(absoluteTolerance, relativeTolerance * Math.abs(total)) && values.length < maxPanels) {
+    let worst = 0;
+    for (let i = 1; i < errors.length; i++) if (errors[i]! > errors[worst]!) worst = i;
+    const lo = lows[worst]!;
+    const hi = highs[worst]!;
     const mid = 0.5 * (lo + hi);
+    if (mid === lo || mid === hi) break;
     const left = kronrodPanel(f, lo, mid);
     const right = kronrodPanel(f, mid, hi);
-    return refine(lo, mid, left, tolerance / Math.SQRT2, depth + 1) + refine(mid, hi, right, tolerance / Math.SQRT2, depth + 1);
-  };
-  return refine(a, b, whole, target, 0);
+    total += left.value + right.value - values[worst]!;
+    totalError += left.error + right.error - errors[worst]!;
+    highs[worst] = mid;
+    values[worst] = left.value;
+    errors[worst] = left.error;
+    lows.push(mid);
+    highs.push(hi);
+    values.push(right.value);
+    errors.push(right.error);
+  }
+  // Re-sum at the end: the running total accumulates rounding from many updates.
+  let sum = 0;
+  for (const value of values) sum += value;
+  return sum;
 }
