@@ -34,10 +34,14 @@ const designArbitrary: fc.Arbitrary<LinkDesignInput> = fc.record({
     },
     { requiredKeys: ['apertureDiameterM', 'sensitivityDbm', 'opticsLossDb'] },
   ),
-  pointing: fc.record({
-    jitterSigmaPerAxisRad: fc.oneof(fc.constant(0), logUniform(1e-9, 0.1)),
-    staticErrorRad: fc.oneof(fc.constant(0), logUniform(1e-9, 0.1)),
-  }),
+  pointing: fc.record(
+    {
+      jitterSigmaPerAxisRad: fc.oneof(fc.constant(0), logUniform(1e-9, 0.1)),
+      staticErrorRad: fc.oneof(fc.constant(0), logUniform(1e-9, 0.1)),
+      outageProbability: logUniform(1e-9, 0.5),
+    },
+    { requiredKeys: ['jitterSigmaPerAxisRad', 'staticErrorRad'] },
+  ),
   atmosphere: fc.record({
     model: fc.constantFrom('kim' as const, 'kruse' as const),
     visibilityM: logUniform(1, 1e6),
@@ -146,7 +150,7 @@ const completeDesign: LinkDesignInput = {
   rangeM: 2000,
   transmitter: { wavelengthM: 1.55e-6, powerDbm: 20, waistRadiusM: 0.025, halfAngleDivergenceRad: 1e-3, m2: 1.1, opticsLossDb: 1 },
   receiver: { apertureDiameterM: 0.1, sensitivityDbm: -36, opticsLossDb: 1.5, overloadDbm: -5, obscurationRatio: 0.2, fieldOfViewRad: 2e-3 },
-  pointing: { jitterSigmaPerAxisRad: 50e-6, staticErrorRad: 100e-6 },
+  pointing: { jitterSigmaPerAxisRad: 50e-6, staticErrorRad: 100e-6, outageProbability: 1e-3 },
   atmosphere: { model: 'kim', visibilityM: 5000, visibilityDefinition: 'contrast-2-percent', cn2: 5e-14 },
   scintillation: { include: true, probability: 1e-3 },
   systemMarginDb: 2,
@@ -169,9 +173,9 @@ function withValue(path: string[], value: number): unknown {
 describe('design schema properties', () => {
   const paths = numericPaths(completeDesign);
 
-  it('covers every numeric field of the schema (19 of them)', () => {
+  it('covers every numeric field of the schema (20 of them)', () => {
     expect(LinkDesignSchema.safeParse(completeDesign).success).toBe(true);
-    expect(paths).toHaveLength(19);
+    expect(paths).toHaveLength(20);
   });
 
   it('rejects every non-finite number in every numeric field, naming the field', () => {

@@ -13,6 +13,15 @@ export interface TermDescription {
 
 const ANDREWS_PHILLIPS = 'Andrews L.C., Phillips R.L., "Laser Beam Propagation through Random Media", 2nd ed., SPIE Press (2005)';
 
+/** The pointing term of an outage-based design (replaces the mean-loss description). */
+export const POINTING_OUTAGE_DESCRIPTION: TermDescription = {
+  label: 'Pointing error (at the outage probability)',
+  unit: 'dB',
+  method:
+    'Loss 8.686·(r_p/W)² at the radius r_p that the Rician radial error (bias ν = bias·L, jitter σ = jitter·L per axis) exceeds with the design outage probability: Q1(ν/σ, r_p/σ) = p',
+  source: 'Marcum J.I. (1960) Q function; Farid A.A., Hranilovic S., J. Lightwave Technol. 25(7), 1702–1710 (2007) (pointing-error model)',
+};
+
 export const TERM_DESCRIPTIONS: Record<BudgetTermKey, TermDescription> = {
   transmitPower: {
     label: 'Transmit power',

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { requiredThresholdOverSigma } from '../pointing/pointing.js';
 import { LinkDesignSchema, type LinkDesignInput } from '../schemas/link-design.schema.js';
 import { LinkBudgetSchema } from '../schemas/link-budget.schema.js';
 import { availabilityFromClimatology, availabilityFromRecords, clearAirMarginDb } from './availability.js';
@@ -117,6 +118,29 @@ describe('evaluateLink', () => {
     expect(narrow.checks.map((check) => check.key)).toContain('field-of-view-below-turbulence-blur');
     const wide = evaluateLink(variant((design) => (design.receiver.fieldOfViewRad = 5e-3)));
     expect(wide.checks.map((check) => check.key)).not.toContain('field-of-view-below-turbulence-blur');
+  });
+
+  it('budgets the loss at the outage radius for an outage-based design (DOMAIN §4.2)', () => {
+    const outage = evaluateLink(variant((design) => (design.pointing.outageProbability = 1e-3)));
+    // bias/jitter = 100/50 µrad = 2 and p = 1e-3 give r_p = 5.241σ (DOMAIN §4.2, PT-04 example)
+    const radiusM = 5.241 * 50e-6 * 2000;
+    expect(outage.pointingLossModel).toBe('outage');
+    expect(outage.pointingLossDb).toBeCloseTo(8.686 * (radiusM / outage.beamRadiusAtReceiverM) ** 2, 3);
+    expect(outage.pointingLossDb).toBeGreaterThan(budget.pointingLossDb);
+    expect(outage.terms[4]!.label).toMatch(/outage/);
+    expect(budget.pointingLossModel).toBe('mean');
+    const noJitter = evaluateLink(variant((design) => {
+      design.pointing = { jitterSigmaPerAxisRad: 0, staticErrorRad: 100e-6, outageProbability: 1e-3 };
+    }));
+    expect(noJitter.pointingLossDb).toBeCloseTo(8.6859 * ((100e-6 * 2000) / noJitter.beamRadiusAtReceiverM) ** 2, 4);
+  });
+
+  it('uses the Gaussian limit of the Rician tail for a bias of many σ, in agreement with the exact root', () => {
+    const design = variant((d) => (d.pointing = { jitterSigmaPerAxisRad: 1e-6, staticErrorRad: 150e-6, outageProbability: 1e-3 }));
+    const exactRadiusM = requiredThresholdOverSigma({ outageProbability: 1e-3, staticOffsetOverSigma: 150 }) * 1e-6 * 2000;
+    const budgetOutage = evaluateLink(design);
+    const exactLossDb = 2 * (10 / Math.LN10) * (exactRadiusM / budgetOutage.beamRadiusAtReceiverM) ** 2;
+    expect(Math.abs(budgetOutage.pointingLossDb / exactLossDb - 1)).toBeLessThan(1e-6);
   });
 
   it('gives the same margin through linkMarginAtRangeDb', () => {

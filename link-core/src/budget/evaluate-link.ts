@@ -5,7 +5,7 @@
 import { coherenceRadiusM } from '../turbulence/rytov.js';
 import type { BudgetCheck, BudgetTerm, BudgetTermKey, LinkBudget } from '../schemas/link-budget.schema.js';
 import type { LinkDesignInput } from '../schemas/link-design.schema.js';
-import { TERM_DESCRIPTIONS, type TermDescription } from './budget-terms.js';
+import { POINTING_OUTAGE_DESCRIPTION, TERM_DESCRIPTIONS, type TermDescription } from './budget-terms.js';
 import { evaluateChain, resolveDesign, specificAttenuationDbPerKm, type ResolvedDesign } from './link-chain.js';
 
 // The description is passed in (not looked up by key) so that each call site stays monomorphic.
@@ -83,12 +83,13 @@ export function evaluateLink(design: LinkDesignInput): LinkBudget {
   const chain = evaluateChain(resolved, resolved.rangeM, attenuation, resolved.includeScintillation);
   const diffractionRad = diffractionHalfAngle(resolved);
   const defocused = resolved.halfAngleDivergenceRad > diffractionRad;
+  const outagePointing = !Number.isNaN(resolved.pointingOutageAngleRad);
   const terms: BudgetTerm[] = [
     term('transmitPower', TERM_DESCRIPTIONS.transmitPower, resolved.powerDbm),
     term('transmitOptics', TERM_DESCRIPTIONS.transmitOptics, -resolved.transmitOpticsLossDb),
     term('geometricSpread', TERM_DESCRIPTIONS.geometricSpread, -chain.geometricLossDb),
     term('atmosphericAttenuation', TERM_DESCRIPTIONS.atmosphericAttenuation, -chain.atmosphericLossDb),
-    term('pointingLoss', TERM_DESCRIPTIONS.pointingLoss, -chain.pointingLossDb),
+    term('pointingLoss', outagePointing ? POINTING_OUTAGE_DESCRIPTION : TERM_DESCRIPTIONS.pointingLoss, -chain.pointingLossDb),
     term('receiveOptics', TERM_DESCRIPTIONS.receiveOptics, -resolved.receiveOpticsLossDb),
     term('receiverSensitivity', TERM_DESCRIPTIONS.receiverSensitivity, -resolved.sensitivityDbm),
     term('scintillationFade', TERM_DESCRIPTIONS.scintillationFade, -chain.scintillationFadeMarginDb),
@@ -107,6 +108,7 @@ export function evaluateLink(design: LinkDesignInput): LinkBudget {
     specificAttenuationDbPerKm: attenuation,
     atmosphericLossDb: chain.atmosphericLossDb,
     pointingLossDb: chain.pointingLossDb,
+    pointingLossModel: outagePointing ? 'outage' : 'mean',
     receivedPowerDbm: chain.receivedPowerDbm,
     rytovVarianceSpherical: chain.rytovVarianceSpherical,
     scintillationIndex: chain.scintillationIndex,

@@ -6,9 +6,10 @@
  */
 import { VISIBILITY_2_PERCENT_PER_MOR, visibilityExtinctionPerKmFast } from '../atmosphere/visibility-attenuation.js';
 import { launchBeamRadiusAtRangeM } from '../beam/launch.js';
-import { meanPointingLossDb } from '../pointing/pointing.js';
+import { meanPointingLossDb, requiredThresholdOverSigma } from '../pointing/pointing.js';
 import { LINK_DESIGN_DEFAULTS, type LinkDesignInput } from '../schemas/link-design.schema.js';
 import { apertureAveragedFadeMarginDb, apertureAveragedScintillationIndexFast } from '../turbulence/scintillation.js';
+import { normalQuantileOf } from '../turbulence/normal.js';
 import { rytovVarianceFast } from '../turbulence/rytov.js';
 
 const DB_PER_NEPER_POWER = 10 / Math.LN10;
@@ -31,6 +32,11 @@ export interface ResolvedDesign {
   fieldOfViewRad: number | undefined;
   jitterSigmaPerAxisRad: number;
   staticErrorRad: number;
+  /**
+   * outage-based pointing: the angular error exceeded with the outage probability [rad] (range-free,
+   * since bias and jitter both scale with L); NaN for the mean-loss model
+   */
+  pointingOutageAngleRad: number;
   kruse: boolean;
   /** 2 % contrast visibility [km] after any MOR conversion */
   visibility2PercentKm: number;
@@ -40,6 +46,26 @@ export interface ResolvedDesign {
   fadeProbability: number;
   systemMarginDb: number;
 }
+
+/**
+ * Angular pointing error exceeded with probability p by a Rician error with bias θb and per-axis
+ * jitter σθ: r_p/σ from Q1(θb/σθ, r_p/σ) = p, times σθ; the bias itself when there is no jitter.
+ * @see Marcum J.I. (1960); DOMAIN §4.2 (pointing margin for a target outage).
+ */
+function outageAngleRad(jitterSigmaPerAxisRad: number, staticErrorRad: number, outageProbability: number): number {
+  if (jitterSigmaPerAxisRad === 0) return staticErrorRad;
+  const offsetOverSigma = staticErrorRad / jitterSigmaPerAxisRad;
+  if (offsetOverSigma > LARGE_OFFSET_OVER_SIGMA) {
+    // A bias of many σ: R = |ν + x + i·y| ≈ ν + x + y²/(2ν), so r_p ≈ ν + σ·Φ⁻¹(1 − p) + σ²/(2ν)
+    // (derived; within 1e-6 of the exact Marcum-Q root at ν/σ = 100 and closer beyond, where the
+    // exact root is slow to evaluate).
+    return jitterSigmaPerAxisRad * (offsetOverSigma - normalQuantileOf(outageProbability) + 1 / (2 * offsetOverSigma));
+  }
+  return jitterSigmaPerAxisRad * requiredThresholdOverSigma({ outageProbability, staticOffsetOverSigma: offsetOverSigma });
+}
+
+/** Above this bias/jitter ratio the outage radius uses the Gaussian limit of the Rician tail. */
+const LARGE_OFFSET_OVER_SIGMA = 100;
 
 /** Applies the schema defaults with `??` (the hot path never parses). */
 export function resolveDesign(design: LinkDesignInput): ResolvedDesign {
@@ -62,6 +88,8 @@ export function resolveDesign(design: LinkDesignInput): ResolvedDesign {
     fieldOfViewRad: receiver.fieldOfViewRad,
     jitterSigmaPerAxisRad: pointing.jitterSigmaPerAxisRad,
     staticErrorRad: pointing.staticErrorRad,
+    pointingOutageAngleRad:
+      pointing.outageProbability === undefined ? Number.NaN : outageAngleRad(pointing.jitterSigmaPerAxisRad, pointing.staticErrorRad, pointing.outageProbability),
     kruse: (atmosphere.model ?? LINK_DESIGN_DEFAULTS.atmosphereModel) === 'kruse',
     visibility2PercentKm: visibilityM / 1000,
     morInput,
@@ -156,7 +184,14 @@ export function evaluateChain(design: ResolvedDesign, rangeM: number, attenuatio
   const geometricLossDb = centredGeometricLossDb(beamRadiusM, apertureRadiusM, apertureRadiusM * design.obscurationRatio);
   const captureFraction = lastCaptureFraction;
   const atmosphericLossDb = (attenuationDbPerKm * rangeM) / 1000;
-  const pointingLossDb = meanPointingLossDb(beamRadiusM, design.jitterSigmaPerAxisRad * rangeM, design.staticErrorRad * rangeM);
+  let pointingLossDb: number;
+  if (Number.isNaN(design.pointingOutageAngleRad)) {
+    pointingLossDb = meanPointingLossDb(beamRadiusM, design.jitterSigmaPerAxisRad * rangeM, design.staticErrorRad * rangeM);
+  } else {
+    // Loss of a small receiver at the outage radius: −10·log10(exp(−2r²/W²)) = 8.686·(r/W)² (DOMAIN §4.2).
+    const ratio = (design.pointingOutageAngleRad * rangeM) / beamRadiusM;
+    pointingLossDb = 2 * DB_PER_NEPER_POWER * ratio * ratio;
+  }
   const receivedPowerDbm =
     design.powerDbm - design.transmitOpticsLossDb - geometricLossDb - atmosphericLossDb - pointingLossDb - design.receiveOpticsLossDb;
   let rytovVarianceSpherical = 0;

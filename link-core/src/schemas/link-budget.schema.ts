@@ -73,8 +73,9 @@ export const LinkBudgetSchema = z.object({
   specificAttenuationDbPerKm: finiteNumber(),
   /** atmospheric loss γ·L, positive [dB] */
   atmosphericLossDb: finiteNumber(),
-  /** mean pointing loss (Rician error, small-receiver closed form), positive [dB] */
+  /** pointing loss, positive [dB]: the mean loss (Rician error, small-receiver closed form) or, for an outage-based design, the loss at the outage probability */
   pointingLossDb: finiteNumber(),
+  pointingLossModel: z.enum(['mean', 'outage']),
   /** mean received power at the receiver's reference plane [dBm] */
   receivedPowerDbm: finiteNumber(),
   /** spherical-wave Rytov variance β0² (0 when the fade margin is off or Cn² = 0) */

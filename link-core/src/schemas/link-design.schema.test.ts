@@ -67,6 +67,7 @@ describe('LinkDesignSchema', () => {
     ['atmosphere.model', 'fog', 'must be one of kim, kruse'],
     ['atmosphere.visibilityDefinition', '5%', 'must be one of contrast-2-percent, mor-5-percent'],
     ['scintillation.probability', 0, 'probability must be between 0 and 1 (exclusive)'],
+    ['pointing.outageProbability', 1, 'probability must be between 0 and 1 (exclusive)'],
     ['scintillation.probability', 1, 'probability must be between 0 and 1 (exclusive)'],
     ['scintillation.probability', 1.5, 'probability must be between 0 and 1 (exclusive)'],
     ['scintillation.include', 'yes', 'must be true or false'],

@@ -86,6 +86,11 @@ export const PointingSchema = section({
   jitterSigmaPerAxisRad: boundedNumber({ atLeast: 0, atMost: 0.1, unitNote: { upper: '0.1 rad' } }),
   /** fixed pointing bias [rad] */
   staticErrorRad: boundedNumber({ atLeast: 0, atMost: 0.1, unitNote: { upper: '0.1 rad' } }),
+  /**
+   * outage-based design (DOMAIN §4.2, §8): budget the pointing loss that is exceeded only with this
+   * probability instead of the mean loss. Absent: mean loss.
+   */
+  outageProbability: openProbability().optional(),
 });
 
 export const AtmosphereSchema = section({
