@@ -17,7 +17,12 @@ export interface GeodesicInverse {
   azimuth2to1Deg: number;
 }
 
-/** Normalises an angle in degrees to [0, 360). */
+/**
+ * Normalises an angle in degrees to [0, 360) (azimuths: true, clockwise from north).
+ * @param angleDeg any finite angle [deg]
+ * @returns the same direction in [0, 360) [deg]
+ * @see common practice (azimuth convention of DOMAIN §0).
+ */
 export function normaliseAzimuthDeg(angleDeg: number): number {
   const wrapped = angleDeg % 360;
   const positive = wrapped < 0 ? wrapped + 360 : wrapped;

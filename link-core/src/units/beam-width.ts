@@ -95,6 +95,7 @@ export function halfAngleToFullAngleRad(halfAngleRad: number): number {
  * Degrees from radians.
  * @param angleRad angle [rad]
  * @returns angle [deg]
+ * @see BIPM SI Brochure, 9th ed. (2019), table 8 (1° = π/180 rad).
  */
 export function radiansToDegrees(angleRad: number): number {
   return (angleRad * 180) / Math.PI;
@@ -104,6 +105,7 @@ export function radiansToDegrees(angleRad: number): number {
  * Radians from degrees.
  * @param angleDeg angle [deg]
  * @returns angle [rad]
+ * @see BIPM SI Brochure, 9th ed. (2019), table 8 (1° = π/180 rad).
  */
 export function degreesToRadians(angleDeg: number): number {
   return (angleDeg * Math.PI) / 180;
