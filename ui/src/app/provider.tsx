@@ -17,8 +17,10 @@ export function ThemedRoot({ children }: { children: ReactNode }) {
   const [mode] = useThemeMode();
   const styles = useStyles();
   return (
-    <FluentProvider theme={mode === 'dark' ? darkTheme : lightTheme} className={styles.root} data-theme={mode}>
-      {children}
+    // Layout styles go on an inner element: Fluent copies the provider's classes to portal nodes
+    // (tooltips, dialogs), which must not cover the page.
+    <FluentProvider theme={mode === 'dark' ? darkTheme : lightTheme} data-theme={mode}>
+      <div className={styles.root}>{children}</div>
     </FluentProvider>
   );
 }

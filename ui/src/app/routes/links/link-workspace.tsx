@@ -1,6 +1,57 @@
-import { Spinner } from '@fluentui/react-components';
+import { Link as RouterLink, useParams } from 'react-router-dom';
+import { Button, Skeleton, SkeletonItem } from '@fluentui/react-components';
+import { HistoryRegular } from '@fluentui/react-icons';
+import { paths } from '@/config/paths';
+import { policies, useCurrentUser } from '@/lib/auth';
+import { ErrorView } from '@/components/errors/route-error';
+import { useLink } from '@/features/links/api/get-link';
+import { LinkHeader } from '@/features/links/components/link-header';
+import { DesignReadout } from '@/features/link-design/components/design-readout';
+import { DesignResults } from '@/features/link-design/components/design-results';
+import { DesignEditor } from '@/app/routes/links/design-editor';
+import type { LinkDetail } from '@/features/links/api/types';
+import { useWorkspaceStyles } from '@/app/routes/links/workspace-layout';
 
-// Being built (issue 4): the route exists so that the router and links resolve.
-export function Component() {
-  return <Spinner label="This page is being built" />;
+function HistoryButton({ linkId }: { linkId: string }) {
+  return (
+    <RouterLink to={paths.app.linkHistory.getHref(linkId)} tabIndex={-1}>
+      <Button icon={<HistoryRegular />}>History and review</Button>
+    </RouterLink>
+  );
 }
+
+/** Installers and reviewers read the stored design: no inputs, no save. */
+function DesignViewer({ link }: { link: LinkDetail }) {
+  const styles = useWorkspaceStyles();
+  return (
+    <>
+      <LinkHeader link={link} actions={<HistoryButton linkId={link.id} />} />
+      <div className={styles.layout}>
+        <DesignReadout design={link.design} />
+        <div className={styles.results}>
+          <DesignResults design={link.design} budget={link.budget} />
+        </div>
+      </div>
+    </>
+  );
+}
+
+export function LinkWorkspaceRoute() {
+  const { linkId = '' } = useParams();
+  const link = useLink(linkId);
+  const role = useCurrentUser().data?.role;
+
+  if (link.isPending) {
+    return (
+      <Skeleton aria-label="Loading the link">
+        <SkeletonItem size={40} style={{ width: '40%', marginBottom: 16 }} />
+        <SkeletonItem style={{ height: 480 }} />
+      </Skeleton>
+    );
+  }
+  if (link.isError) return <ErrorView error={link.error} />;
+  if (!policies.canEditDesigns(role)) return <DesignViewer link={link.data} />;
+  return <DesignEditor key={link.data.id} link={link.data} historyAction={<HistoryButton linkId={link.data.id} />} />;
+}
+
+export const Component = LinkWorkspaceRoute;

@@ -82,6 +82,7 @@ export function LinksListRoute() {
       if ((query.q ?? '') !== searchText.trim()) update({ q: searchText.trim() || undefined, page: undefined });
     }, 250);
     return () => window.clearTimeout(timer);
+    // Only typing restarts the pause; the URL update reads the latest query when it fires.
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [searchText]);
 

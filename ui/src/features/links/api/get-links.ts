@@ -1,6 +1,6 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { LinkStatus, LinkSummary, Paged } from '@/features/links/api/types';
+import type { LinkListResponse, LinkStatus } from '@/features/links/api/types';
 
 export type LinkSortField = 'name' | 'status' | 'linkMarginDb' | 'rangeM' | 'wavelengthM' | 'updatedAt';
 
@@ -14,7 +14,7 @@ export interface LinksQuery {
 }
 
 export const getLinks = (query: LinksQuery, signal?: AbortSignal) =>
-  api.get<Paged<LinkSummary>>('/links', {
+  api.get<LinkListResponse>('/links', {
     signal,
     params: {
       page: query.page,

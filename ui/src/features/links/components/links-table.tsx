@@ -92,7 +92,7 @@ export function LinksTable({ links, sort, onSortChange }: LinksTableProps) {
         renderCell: (link) => (
           <Tooltip content={formatDateTime(link.updatedAt)} relationship="description">
             <Text>
-              {formatRelativeTime(link.updatedAt)} · rev. {link.latestRevision}
+              {formatRelativeTime(link.updatedAt)} · rev. {link.revision}
             </Text>
           </Tooltip>
         ),

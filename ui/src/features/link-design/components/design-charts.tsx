@@ -1,0 +1,113 @@
+import { useMemo, type ReactNode } from 'react';
+import { Caption1, Subtitle2, makeStyles, tokens } from '@fluentui/react-components';
+import {
+  beamEnvelope,
+  marginVsRange,
+  marginVsVisibility,
+  type LinkBudget,
+  type LinkDesignInput,
+} from '@beamwright/link-core';
+import { LazyEChart } from '@/components/charts/lazy-echart';
+import { useThemeMode } from '@/lib/theme';
+import { formatDistance, formatLength } from '@/lib/format';
+import {
+  beamEnvelopeOption,
+  marginVsRangeOption,
+  marginVsVisibilityOption,
+  waterfallOption,
+} from '@/features/link-design/charts/chart-options';
+import { VISIBILITY_BANDS } from '@/features/link-design/charts/visibility-bands';
+
+const useStyles = makeStyles({
+  grid: { display: 'grid', gridTemplateColumns: 'repeat(auto-fit, minmax(440px, 1fr))', gap: tokens.spacingHorizontalL },
+  card: {
+    backgroundColor: tokens.colorNeutralBackground1,
+    border: `1px solid ${tokens.colorNeutralStroke2}`,
+    borderRadius: tokens.borderRadiusLarge,
+    padding: tokens.spacingHorizontalM,
+    display: 'grid',
+    rowGap: tokens.spacingVerticalXS,
+    minWidth: 0,
+  },
+  caption: { color: tokens.colorNeutralForeground3 },
+});
+
+function ChartCard({ title, caption, children }: { title: string; caption: ReactNode; children: ReactNode }) {
+  const styles = useStyles();
+  return (
+    <section className={styles.card} aria-label={title}>
+      <Subtitle2 as="h3">{title}</Subtitle2>
+      {children}
+      <Caption1 className={styles.caption}>{caption}</Caption1>
+    </section>
+  );
+}
+
+export function BudgetWaterfall({ budget }: { budget: LinkBudget }) {
+  const [mode] = useThemeMode();
+  const option = useMemo(() => waterfallOption(budget, mode), [budget, mode]);
+  return (
+    <ChartCard title="From transmit power to margin" caption="Each bar is one term of the budget in dBm; the last bar is the margin above the receiver sensitivity (dashed line).">
+      <LazyEChart option={option} ariaLabel="Waterfall of the link budget from transmit power to link margin" height={300} testId="chart-waterfall" />
+    </ChartCard>
+  );
+}
+
+export interface DesignChartsProps {
+  design: LinkDesignInput;
+  budget: LinkBudget;
+  requiredMarginDb: number;
+}
+
+/** Beam envelope, margin against range and margin against visibility, from the (deferred) design. */
+export function DesignCharts({ design, budget, requiredMarginDb }: DesignChartsProps) {
+  const styles = useStyles();
+  const [mode] = useThemeMode();
+  const series = useMemo(() => {
+    try {
+      return {
+        envelope: beamEnvelope(design, { points: 121 }),
+        range: marginVsRange(design, { points: 121 }),
+        visibility: marginVsVisibility(design, { points: 81 }),
+      };
+    } catch {
+      return null;
+    }
+  }, [design]);
+  const options = useMemo(
+    () =>
+      series && {
+        envelope: beamEnvelopeOption(series.envelope, mode),
+        range: marginVsRangeOption(series.range, design.rangeM, requiredMarginDb, mode),
+        visibility: marginVsVisibilityOption(series.visibility, design.atmosphere.visibilityM, mode, VISIBILITY_BANDS),
+      },
+    [series, mode, design, requiredMarginDb],
+  );
+  if (!series || !options) return null;
+  const { envelope } = series;
+  const rayleighText = envelope.rayleighRangeEndWithinPath
+    ? `The dashed line marks where the Rayleigh range ends (${formatDistance(envelope.rayleighRangeEndM)} from the transmitter); beyond it the beam grows linearly.`
+    : envelope.rayleighRangeEndM > 0
+      ? `Rayleigh range ${formatDistance(envelope.rayleighRangeM)}: it ends beyond the receiver, so the beam stays near its waist over the whole path.`
+      : `The beam is launched diverging (virtual waist ${formatDistance(-envelope.waistPositionM)} behind the aperture, Rayleigh range ${formatDistance(envelope.rayleighRangeM)}), so it widens from the start.`;
+
+  return (
+    <div className={styles.grid}>
+      <ChartCard
+        title="Beam along the path"
+        caption={`${rayleighText} Receive aperture radius ${formatLength(envelope.receiveApertureRadiusM)}; beam 1/e² radius at the receiver ${formatLength(budget.beamRadiusAtReceiverM)}.`}
+      >
+        <LazyEChart option={options.envelope} ariaLabel="Beam radius along the path against the receive aperture" testId="chart-beam" />
+      </ChartCard>
+      <ChartCard title="Margin against path length" caption="Everything but the path length as designed. The shaded band is where the link fails.">
+        <LazyEChart option={options.range} ariaLabel="Link margin against path length" testId="chart-range" />
+      </ChartCard>
+      <ChartCard
+        title="Margin against visibility"
+        caption="Everything but the visibility as designed, in the visibility definition chosen. Bands: international visibility code."
+      >
+        <LazyEChart option={options.visibility} ariaLabel="Link margin against visibility" testId="chart-visibility" />
+      </ChartCard>
+    </div>
+  );
+}

@@ -1,0 +1,293 @@
+// The form's working copy of a design: the text the engineer typed for every quantity, plus the
+// choices. Turning it into a LinkDesignInput parses each text with link-core's parseQuantity and
+// validates the result with the shared LinkDesignSchema, so every problem lands next to its field.
+import { LinkDesignSchema, convertBeamWidth, formatZodIssues, type LinkDesignInput } from '@beamwright/link-core';
+import { parseQuantity } from '@beamwright/link-core/units';
+import type { ReceiverSpec, TransmitterSpec } from '@beamwright/link-core/contracts';
+import {
+  QUANTITY_FIELDS,
+  QUANTITY_FIELD_IDS,
+  type QuantityField,
+  type QuantityFieldId,
+  type WidthDefinition,
+} from '@/features/link-design/design-fields';
+
+export type WidthExtent = 'radius' | 'diameter';
+export type AngleExtent = 'half' | 'full';
+
+export interface DesignDraft {
+  text: Record<QuantityFieldId, string>;
+  beamSize: { extent: WidthExtent; definition: WidthDefinition };
+  divergence: { extent: AngleExtent; definition: WidthDefinition };
+  atmosphereModel: string;
+  visibilityDefinition: string;
+  scintillationInclude: boolean;
+}
+
+export type FieldErrors = Partial<Record<string, string>>;
+
+export interface DraftEvaluation {
+  /** the validated design (defaults applied), or null while any field has a problem */
+  design: LinkDesignInput | null;
+  /** field id -> message, already starting with the field's label */
+  errors: FieldErrors;
+}
+
+const UNIT_IN_METRES_OR_RADIANS: Record<string, number> = {
+  km: 1e3,
+  m: 1,
+  mm: 1e-3,
+  nm: 1e-9,
+  mrad: 1e-3,
+  'µrad': 1e-6,
+};
+
+const extentOf = (extent: WidthExtent | AngleExtent) => (extent === 'diameter' || extent === 'full' ? 'diameter' : 'radius');
+
+/** A datasheet width or angle -> the schema's 1/e² radius or half-angle (link-core's Gaussian conversion). */
+export function toOneOverESquaredRadius(value: number, extent: WidthExtent | AngleExtent, definition: WidthDefinition): number {
+  return convertBeamWidth({ value, definition, extent: extentOf(extent) }, { definition: '1/e2', extent: 'radius' });
+}
+
+/** The schema's 1/e² radius or half-angle -> a width or angle in the chosen definition. */
+export function fromOneOverESquaredRadius(value: number, extent: WidthExtent | AngleExtent, definition: WidthDefinition): number {
+  return convertBeamWidth({ value, definition: '1/e2', extent: 'radius' }, { definition, extent: extentOf(extent) });
+}
+
+// Six significant figures: enough to give back what was typed, without binary noise.
+function writeNumber(value: number): string {
+  return String(Number(value.toPrecision(6)));
+}
+
+function writeQuantity(field: QuantityField, value: number): string {
+  switch (field.kind) {
+    case 'power':
+      return `${writeNumber(value)} dBm`;
+    case 'decibel':
+      return `${writeNumber(value)} dB`;
+    case 'length':
+    case 'angle': {
+      const unit = field.id === 'rangeM' && value < 1000 ? 'm' : field.unit;
+      return `${writeNumber(value / UNIT_IN_METRES_OR_RADIANS[unit]!)} ${unit}`;
+    }
+    default:
+      return writeNumber(value);
+  }
+}
+
+function readPath(source: unknown, path: string): unknown {
+  let current: unknown = source;
+  for (const key of path.split('.')) {
+    if (current === null || typeof current !== 'object') return undefined;
+    current = (current as Record<string, unknown>)[key];
+  }
+  return current;
+}
+
+function writePath(target: Record<string, unknown>, path: string, value: unknown) {
+  const keys = path.split('.');
+  let current = target;
+  for (const key of keys.slice(0, -1)) {
+    if (current[key] === null || typeof current[key] !== 'object') current[key] = {};
+    current = current[key] as Record<string, unknown>;
+  }
+  const last = keys[keys.length - 1]!;
+  if (value === undefined) delete current[last];
+  else current[last] = value;
+}
+
+/** The form's text for a stored design (SI values written in each field's usual unit). */
+export function draftFromDesign(design: LinkDesignInput): DesignDraft {
+  const text = {} as Record<QuantityFieldId, string>;
+  for (const id of QUANTITY_FIELD_IDS) {
+    const value = readPath(design, id);
+    text[id] = typeof value === 'number' && Number.isFinite(value) ? writeQuantity(QUANTITY_FIELDS[id], value) : '';
+  }
+  // Defaults of the schema are shown, so the engineer sees what the budget assumes.
+  if (text['transmitter.m2'] === '') text['transmitter.m2'] = '1';
+  if (text['receiver.obscurationRatio'] === '') text['receiver.obscurationRatio'] = '0';
+  if (text['scintillation.probability'] === '') text['scintillation.probability'] = '0.001';
+  if (text.systemMarginDb === '') text.systemMarginDb = '0 dB';
+  return {
+    text,
+    beamSize: { extent: 'radius', definition: '1/e2' },
+    divergence: { extent: 'half', definition: '1/e2' },
+    atmosphereModel: design.atmosphere?.model ?? 'kim',
+    visibilityDefinition: design.atmosphere?.visibilityDefinition ?? 'contrast-2-percent',
+    scintillationInclude: design.scintillation?.include ?? true,
+  };
+}
+
+function mathjsUnit(unit: string): string {
+  return unit.replace('µ', 'u');
+}
+
+function parseField(field: QuantityField, text: string): { ok: true; value: number | undefined } | { ok: false; reason: string } {
+  if (text.trim() === '') return field.optional ? { ok: true, value: undefined } : { ok: false, reason: 'is required' };
+  const parsed = parseQuantity(text, field.kind, {
+    defaultUnit: field.unit === '' ? undefined : mathjsUnit(field.unit),
+    allowNegative: field.kind === 'decibel',
+    allowZero: field.kind !== 'power',
+  });
+  if (!parsed.ok) return { ok: false, reason: parsed.reason };
+  // Powers are parsed to watts; the schema holds them in dBm.
+  const value = field.kind === 'power' ? 10 * Math.log10(parsed.valueSi / 1e-3) : parsed.valueSi;
+  return { ok: true, value };
+}
+
+function sentence(label: string, reason: string): string {
+  return `${label} ${reason}`;
+}
+
+type FieldReading = { ok: true; value: number | undefined } | { ok: false; reason: string };
+
+/** Each quantity field read into the schema's unit (1/e² radius and half-angle included). */
+export function readDraftValues(draft: DesignDraft): Record<QuantityFieldId, FieldReading> {
+  const readings = {} as Record<QuantityFieldId, FieldReading>;
+  for (const id of QUANTITY_FIELD_IDS) {
+    const parsed = parseField(QUANTITY_FIELDS[id], draft.text[id]);
+    if (parsed.ok && parsed.value !== undefined) {
+      if (id === 'transmitter.waistRadiusM') {
+        parsed.value = toOneOverESquaredRadius(parsed.value, draft.beamSize.extent, draft.beamSize.definition);
+      } else if (id === 'transmitter.halfAngleDivergenceRad') {
+        parsed.value = toOneOverESquaredRadius(parsed.value, draft.divergence.extent, draft.divergence.definition);
+      }
+    }
+    readings[id] = parsed;
+  }
+  return readings;
+}
+
+/**
+ * Parses and validates the draft. `base` is the design the draft started from: fields the form does
+ * not know about are carried over unchanged, so nothing stored is dropped by an edit.
+ */
+export function evaluateDraft(draft: DesignDraft, base: LinkDesignInput | null): DraftEvaluation {
+  const candidate: Record<string, unknown> = base ? (structuredClone(base) as unknown as Record<string, unknown>) : {};
+  const errors: FieldErrors = {};
+  const readings = readDraftValues(draft);
+
+  for (const id of QUANTITY_FIELD_IDS) {
+    const reading = readings[id];
+    if (!reading.ok) {
+      errors[id] = sentence(QUANTITY_FIELDS[id].label, reading.reason);
+      writePath(candidate, id, undefined);
+    } else {
+      writePath(candidate, id, reading.value);
+    }
+  }
+  writePath(candidate, 'atmosphere.model', draft.atmosphereModel);
+  writePath(candidate, 'atmosphere.visibilityDefinition', draft.visibilityDefinition);
+  writePath(candidate, 'scintillation.include', draft.scintillationInclude);
+
+  const result = LinkDesignSchema.safeParse(candidate);
+  if (!result.success) {
+    for (const issue of formatZodIssues(result.error)) {
+      if (errors[issue.path]) continue; // the parse problem says more than "is required"
+      const label = (QUANTITY_FIELDS as Record<string, QuantityField | undefined>)[issue.path]?.label;
+      errors[issue.path] = label ? sentence(label, issue.message) : `${issue.path || 'Design'}: ${issue.message}`;
+    }
+  }
+  if (Object.keys(errors).length > 0 || !result.success) return { design: null, errors };
+  return { design: result.data, errors };
+}
+
+function sameNumber(a: number | undefined, b: number | undefined): boolean {
+  if (a === undefined || b === undefined) return a === b;
+  return Math.abs(a - b) <= 1e-9 * Math.max(Math.abs(a), Math.abs(b));
+}
+
+export interface RebaseResult {
+  /** the latest design with the engineer's own edits applied on top */
+  draft: DesignDraft;
+  /** fields the engineer had changed, now re-applied */
+  reapplied: string[];
+  /** of those, the fields the other save had changed too (the engineer's value is kept) */
+  overlapping: string[];
+}
+
+/**
+ * After a save conflict: start again from the latest stored design and re-apply every field the
+ * engineer had changed relative to the revision they started from. Text that does not parse counts
+ * as an edit and is kept as typed, so nothing typed is lost.
+ */
+export function rebaseDraft(mine: DesignDraft, myBase: LinkDesignInput, latest: LinkDesignInput): RebaseResult {
+  const baseDraft = draftFromDesign(myBase);
+  const next = draftFromDesign(latest);
+  const mineReadings = readDraftValues(mine);
+  const baseReadings = readDraftValues(baseDraft);
+  const latestReadings = readDraftValues(next);
+  const differs = (a: FieldReading, b: FieldReading) => !(a.ok && b.ok && sameNumber(a.value, b.value));
+  const reapplied: string[] = [];
+  const overlapping: string[] = [];
+
+  for (const id of QUANTITY_FIELD_IDS) {
+    if (!differs(mineReadings[id], baseReadings[id])) continue;
+    next.text[id] = mine.text[id];
+    if (id === 'transmitter.waistRadiusM') next.beamSize = { ...mine.beamSize };
+    if (id === 'transmitter.halfAngleDivergenceRad') next.divergence = { ...mine.divergence };
+    reapplied.push(id);
+    if (differs(baseReadings[id], latestReadings[id])) overlapping.push(id);
+  }
+
+  const choices = [
+    ['atmosphereModel', 'atmosphere.model'],
+    ['visibilityDefinition', 'atmosphere.visibilityDefinition'],
+    ['scintillationInclude', 'scintillation.include'],
+  ] as const;
+  for (const [key, path] of choices) {
+    if (mine[key] === baseDraft[key]) continue;
+    (next as unknown as Record<string, unknown>)[key] = mine[key];
+    reapplied.push(path);
+    if (draftFromDesign(latest)[key] !== baseDraft[key]) overlapping.push(path);
+  }
+  return { draft: next, reapplied, overlapping };
+}
+
+/** Paths of the quantity fields whose text differs between two drafts. */
+export function changedFields(before: DesignDraft, after: DesignDraft): QuantityFieldId[] {
+  return QUANTITY_FIELD_IDS.filter((id) => before.text[id].trim() !== after.text[id].trim());
+}
+
+/** Fills the transmitter fields from a catalogue model, keeping the datasheet's own definitions. */
+export function applyTransmitterSpec(draft: DesignDraft, spec: TransmitterSpec): DesignDraft {
+  const text = { ...draft.text };
+  const write = (id: QuantityFieldId, value: number | undefined) => {
+    text[id] = value === undefined ? '' : writeQuantity(QUANTITY_FIELDS[id], value);
+  };
+  write('transmitter.wavelengthM', spec.wavelengthM);
+  write('transmitter.powerDbm', spec.powerDbm);
+  write('transmitter.m2', spec.m2 ?? 1);
+  write('transmitter.opticsLossDb', spec.opticsLossDb);
+  let beamSize: DesignDraft['beamSize'];
+  if (spec.beamSize.kind === 'waist-radius') {
+    write('transmitter.waistRadiusM', spec.beamSize.waistRadiusM);
+    beamSize = { extent: 'radius', definition: '1/e2' };
+  } else {
+    write('transmitter.waistRadiusM', spec.beamSize.diameterM);
+    beamSize = { extent: 'diameter', definition: spec.beamSize.definition };
+  }
+  let divergence = draft.divergence;
+  if (spec.divergence) {
+    write('transmitter.halfAngleDivergenceRad', spec.divergence.angleRad);
+    divergence = { extent: spec.divergence.angle, definition: spec.divergence.definition };
+  } else {
+    write('transmitter.halfAngleDivergenceRad', undefined);
+  }
+  return { ...draft, text, beamSize, divergence };
+}
+
+/** Fills the receiver fields from a catalogue model. */
+export function applyReceiverSpec(draft: DesignDraft, spec: ReceiverSpec): DesignDraft {
+  const text = { ...draft.text };
+  const write = (id: QuantityFieldId, value: number | undefined) => {
+    text[id] = value === undefined ? '' : writeQuantity(QUANTITY_FIELDS[id], value);
+  };
+  write('receiver.apertureDiameterM', spec.apertureDiameterM);
+  write('receiver.obscurationRatio', spec.obscurationRatio ?? 0);
+  write('receiver.opticsLossDb', spec.opticsLossDb);
+  write('receiver.sensitivityDbm', spec.sensitivityDbm);
+  write('receiver.overloadDbm', spec.overloadDbm);
+  write('receiver.fieldOfViewRad', spec.fieldOfViewRad);
+  return { ...draft, text };
+}

@@ -1,0 +1,54 @@
+import type { ReactNode } from 'react';
+import { Link as RouterLink } from 'react-router-dom';
+import { Caption1, Title2, makeStyles, tokens } from '@fluentui/react-components';
+import { ChevronRightRegular } from '@fluentui/react-icons';
+import { paths } from '@/config/paths';
+import { formatDateTime } from '@/lib/format';
+import { LinkStatusBadge } from '@/features/links/components/link-status-badge';
+import type { LinkDetail } from '@/features/links/api/types';
+
+const useStyles = makeStyles({
+  root: { display: 'flex', flexWrap: 'wrap', alignItems: 'flex-end', justifyContent: 'space-between', columnGap: tokens.spacingHorizontalL, rowGap: tokens.spacingVerticalS, marginBottom: tokens.spacingVerticalL },
+  crumbs: { display: 'flex', alignItems: 'center', columnGap: tokens.spacingHorizontalXS, color: tokens.colorNeutralForeground3 },
+  crumbLink: { color: tokens.colorBrandForeground1 },
+  titleRow: { display: 'flex', alignItems: 'center', columnGap: tokens.spacingHorizontalM, flexWrap: 'wrap' },
+  meta: { color: tokens.colorNeutralForeground3 },
+  actions: { display: 'flex', columnGap: tokens.spacingHorizontalS, flexWrap: 'wrap' },
+});
+
+export function LinkHeader({ link, section, actions }: { link: LinkDetail; section?: string; actions?: ReactNode }) {
+  const styles = useStyles();
+  const ends = link.siteA || link.siteB ? `${link.siteA?.name ?? '—'} ↔ ${link.siteB?.name ?? '—'} · ` : '';
+  return (
+    <div className={styles.root}>
+      <div>
+        <nav className={styles.crumbs} aria-label="Breadcrumb">
+          <RouterLink className={styles.crumbLink} to={paths.app.links.getHref()}>
+            Links
+          </RouterLink>
+          <ChevronRightRegular aria-hidden />
+          {section ? (
+            <>
+              <RouterLink className={styles.crumbLink} to={paths.app.link.getHref(link.id)}>
+                {link.name}
+              </RouterLink>
+              <ChevronRightRegular aria-hidden />
+              <span>{section}</span>
+            </>
+          ) : (
+            <span>{link.name}</span>
+          )}
+        </nav>
+        <div className={styles.titleRow}>
+          <Title2 as="h1">{section ?? link.name}</Title2>
+          <LinkStatusBadge status={link.status} />
+        </div>
+        <Caption1 className={styles.meta} data-testid="revision-meta">
+          {ends}Revision {link.revision} by {link.author.displayName}, {formatDateTime(link.revisedAt)}
+          {link.approval ? ` · approved by ${link.approval.by.displayName}` : ''}
+        </Caption1>
+      </div>
+      {actions && <div className={styles.actions}>{actions}</div>}
+    </div>
+  );
+}

@@ -1,0 +1,61 @@
+import { Badge, Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, Text, makeStyles, tokens } from '@fluentui/react-components';
+import { CheckmarkStarburstRegular } from '@fluentui/react-icons';
+import type { RevisionSummary } from '@/features/links/api/types';
+import { MarginBadge } from '@/components/ui/margin-verdict';
+import { formatDateTime, formatDistance, formatWavelength } from '@/lib/format';
+
+const useStyles = makeStyles({
+  number: { fontVariantNumeric: 'tabular-nums', whiteSpace: 'nowrap' },
+  note: { whiteSpace: 'pre-wrap', maxWidth: '420px' },
+  muted: { color: tokens.colorNeutralForeground3 },
+});
+
+/** Every revision of a link, newest first. */
+export function RevisionsTable({ revisions }: { revisions: RevisionSummary[] }) {
+  const styles = useStyles();
+  const newestFirst = [...revisions].sort((a, b) => b.revision - a.revision);
+  return (
+    <Table size="small" aria-label="Revisions" data-testid="revisions-table">
+      <TableHeader>
+        <TableRow>
+          <TableHeaderCell style={{ width: 72 }}>Rev.</TableHeaderCell>
+          <TableHeaderCell>Note</TableHeaderCell>
+          <TableHeaderCell>Saved</TableHeaderCell>
+          <TableHeaderCell>Link margin</TableHeaderCell>
+          <TableHeaderCell>Path</TableHeaderCell>
+          <TableHeaderCell>Approval</TableHeaderCell>
+        </TableRow>
+      </TableHeader>
+      <TableBody>
+        {newestFirst.map((revision) => (
+          <TableRow key={revision.revision} data-revision={revision.revision}>
+            <TableCell className={styles.number}>
+              <Text weight="semibold">{revision.revision}</Text>
+            </TableCell>
+            <TableCell className={styles.note}>{revision.note || <span className={styles.muted}>(no note)</span>}</TableCell>
+            <TableCell>
+              {revision.author.displayName}
+              <br />
+              <span className={styles.muted}>{formatDateTime(revision.createdAt)}</span>
+            </TableCell>
+            <TableCell>
+              <MarginBadge linkMarginDb={revision.linkMarginDb} size="small" />
+            </TableCell>
+            <TableCell className={styles.number}>
+              {formatDistance(revision.rangeM)} · {formatWavelength(revision.wavelengthM)}
+            </TableCell>
+            <TableCell>
+              {revision.approval ? (
+                <Badge appearance="tint" color="success" icon={<CheckmarkStarburstRegular />}>
+                  {revision.approval.by.displayName}, {formatDateTime(revision.approval.at)}
+                </Badge>
+              ) : (
+                <span className={styles.muted}>—</span>
+              )}
+            </TableCell>
+          </TableRow>
+        ))}
+      </TableBody>
+    </Table>
+  );
+}

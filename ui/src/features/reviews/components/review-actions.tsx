@@ -1,0 +1,150 @@
+import { useState, type ReactElement } from 'react';
+import {
+  Body1,
+  Button,
+  Dialog,
+  DialogActions,
+  DialogBody,
+  DialogContent,
+  DialogSurface,
+  DialogTitle,
+  Field,
+  MessageBar,
+  MessageBarBody,
+  Spinner,
+  Textarea,
+  makeStyles,
+  tokens,
+} from '@fluentui/react-components';
+import { ArrowReplyRegular, CheckmarkRegular, PlugConnectedRegular, SendRegular } from '@fluentui/react-icons';
+import type { LinkStatus, ReviewAction, Role } from '@beamwright/link-core/contracts';
+import { useActOnRevision } from '@/features/reviews/api/act-on-revision';
+
+const useStyles = makeStyles({
+  bar: { display: 'flex', flexWrap: 'wrap', columnGap: tokens.spacingHorizontalS, rowGap: tokens.spacingVerticalS },
+  dialog: { display: 'grid', rowGap: tokens.spacingVerticalM },
+});
+
+interface ActionSpec {
+  action: ReviewAction;
+  label: string;
+  title: string;
+  explain: string;
+  commentRequired: boolean;
+  icon: ReactElement;
+  appearance: 'primary' | 'secondary';
+}
+
+function actionsFor(role: Role | undefined, status: LinkStatus): ActionSpec[] {
+  const actions: ActionSpec[] = [];
+  const writes = role === 'engineer' || role === 'admin';
+  const reviews = role === 'reviewer' || role === 'admin';
+  const installs = role === 'installer' || role === 'admin';
+  if (writes && status === 'draft') {
+    actions.push({ action: 'submit', label: 'Submit for review', title: 'Submit for review', explain: 'A reviewer will approve the revision or return it with comments.', commentRequired: false, icon: <SendRegular />, appearance: 'primary' });
+  }
+  if (reviews && status === 'in_review') {
+    actions.push({ action: 'approve', label: 'Approve', title: 'Approve this revision', explain: 'Approval is recorded with your name and the time; an approved revision never changes.', commentRequired: false, icon: <CheckmarkRegular />, appearance: 'primary' });
+    actions.push({ action: 'return', label: 'Return with comment', title: 'Return to the engineer', explain: 'Say what must change; the link goes back to draft.', commentRequired: true, icon: <ArrowReplyRegular />, appearance: 'secondary' });
+  }
+  if (installs && status === 'approved') {
+    actions.push({ action: 'install', label: 'Record as installed', title: 'Record as installed', explain: 'Marks the approved revision as the one mounted and aligned on site.', commentRequired: false, icon: <PlugConnectedRegular />, appearance: 'secondary' });
+  }
+  return actions;
+}
+
+/** The review step the caller's role allows on the latest revision, each with a comment. */
+export function ReviewActions({ linkId, revision, status, role }: { linkId: string; revision: number; status: LinkStatus; role: Role | undefined }) {
+  const styles = useStyles();
+  const act = useActOnRevision(linkId);
+  const [open, setOpen] = useState<ActionSpec | null>(null);
+  const [comment, setComment] = useState('');
+  const [commentError, setCommentError] = useState<string | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  const actions = actionsFor(role, status);
+  if (actions.length === 0) return null;
+
+  const submit = () => {
+    if (!open) return;
+    if (open.commentRequired && comment.trim() === '') {
+      setCommentError('A comment is required: tell the engineer what to change.');
+      return;
+    }
+    setError(null);
+    act.mutate(
+      { revision, action: open.action, comment: comment.trim() },
+      {
+        onSuccess: () => {
+          setOpen(null);
+          setComment('');
+        },
+        onError: (failure) => {
+          const issue = (failure as { issues?: { path: string; message: string }[] }).issues?.find((candidate) => candidate.path === 'comment');
+          if (issue) setCommentError(`Comment ${issue.message}`);
+          else setError(failure instanceof Error ? failure.message : 'The action failed.');
+        },
+      },
+    );
+  };
+
+  return (
+    <>
+      <div className={styles.bar} data-testid="review-actions">
+        {actions.map((spec) => (
+          <Button
+            key={spec.action}
+            appearance={spec.appearance}
+            icon={spec.icon}
+            onClick={() => {
+              setOpen(spec);
+              setCommentError(null);
+              setError(null);
+            }}
+          >
+            {spec.label}
+          </Button>
+        ))}
+      </div>
+      <Dialog open={open !== null} onOpenChange={(_, data) => !data.open && setOpen(null)}>
+        <DialogSurface>
+          <DialogBody>
+            <DialogTitle>
+              {open?.title} (revision {revision})
+            </DialogTitle>
+            <DialogContent className={styles.dialog}>
+              <Body1>{open?.explain}</Body1>
+              <Field
+                label="Comment"
+                required={open?.commentRequired}
+                validationMessage={commentError ?? undefined}
+                validationState={commentError ? 'error' : 'none'}
+                hint={open?.commentRequired ? undefined : 'Optional.'}
+              >
+                <Textarea
+                  value={comment}
+                  onChange={(_, data) => {
+                    setComment(data.value);
+                    if (data.value.trim()) setCommentError(null);
+                  }}
+                  resize="vertical"
+                  maxLength={4000}
+                />
+              </Field>
+              {error && (
+                <MessageBar intent="error">
+                  <MessageBarBody>{error}</MessageBarBody>
+                </MessageBar>
+              )}
+            </DialogContent>
+            <DialogActions>
+              <Button onClick={() => setOpen(null)}>Cancel</Button>
+              <Button appearance="primary" onClick={submit} disabled={act.isPending} icon={act.isPending ? <Spinner size="tiny" /> : open?.icon}>
+                {open?.label}
+              </Button>
+            </DialogActions>
+          </DialogBody>
+        </DialogSurface>
+      </Dialog>
+    </>
+  );
+}
