@@ -246,8 +246,8 @@ export interface ObstacleClearance extends PathObstacle {
   earthBulgeM: number;
   /** Ray height − obstacle height [m] (negative: the line of sight is blocked). */
   clearanceM: number;
-  /** First Fresnel radius [m] (NaN without a beam). */
-  fresnelRadiusM: number;
+  /** First Fresnel radius [m] (null without a beam, which carries the wavelength). */
+  fresnelRadiusM: number | null;
   /** Larger of the two beams' 1/e² radii at the obstacle [m] (0 without a beam). */
   beamRadiusM: number;
   /** Beam radius + allowance [m]. */
@@ -297,7 +297,7 @@ export function lineOfSightClearance(input: LineOfSightClearanceInput): LineOfSi
     const rayHeightM = input.heightAM + ((input.heightBM - input.heightAM) * d1) / total - bulge;
     const clearanceM = rayHeightM - obstacle.heightM;
     let beamRadiusM = 0;
-    let fresnel = NaN;
+    let fresnel: number | null = null;
     if (beam) {
       const theta = beam.halfAngleDivergenceRad ?? 0;
       const m2 = beam.m2 ?? 1;

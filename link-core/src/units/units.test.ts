@@ -1,3 +1,4 @@
+import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { formatQuantity, parseQuantity } from './parse-quantity.js';
@@ -71,5 +72,13 @@ describe('width definitions and dB', () => {
   it('0 dBm is 1 mW and the conversions invert each other', () => {
     expect(dbmToWatts(0)).toBe(1e-3);
     expect(wattsToDbm(dbmToWatts(17.3))).toBeCloseTo(17.3, 12);
+  });
+});
+
+describe('bundle boundary', () => {
+  it('the main entry never imports the mathjs-based parser (it ships as the ./units subpath)', () => {
+    const index = readFileSync(new URL('../index.ts', import.meta.url), 'utf8');
+    expect(index).not.toMatch(/parse-quantity/);
+    expect(index).not.toMatch(/from 'mathjs'/);
   });
 });
