@@ -29,6 +29,8 @@ export type {
 } from './schemas/link-design.schema.js';
 export { LinkBudgetSchema, BudgetTermSchema, BudgetCheckSchema, BUDGET_TERM_KEYS } from './schemas/link-budget.schema.js';
 export type { LinkBudget, BudgetTerm, BudgetCheck, BudgetTermKey } from './schemas/link-budget.schema.js';
+export { VisibilityClimatologySchema, VisibilityRecordsSchema } from './schemas/availability.schema.js';
+export type { VisibilityClimatologyInput, VisibilityRecordsInput } from './schemas/availability.schema.js';
 export { formatZodIssues } from './schemas/format-zod-issues.js';
 export type { FieldIssue } from './schemas/format-zod-issues.js';
 
