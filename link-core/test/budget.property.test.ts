@@ -103,6 +103,8 @@ describe('link budget properties', () => {
         expect(budget.pointingLossDb).toBeGreaterThanOrEqual(0);
         expect(budget.atmosphericLossDb).toBeGreaterThan(0);
         expect(budget.scintillationFadeMarginDb).toBeGreaterThanOrEqual(0);
+        // The API stores the budget as JSON and compares it with evaluateLink: the round trip must be exact.
+        expect(JSON.parse(JSON.stringify(budget))).toEqual(budget);
       }),
       { numRuns: 300 },
     );
