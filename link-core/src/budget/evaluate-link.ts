@@ -10,7 +10,8 @@ import { evaluateChain, resolveDesign, specificAttenuationDbPerKm, type Resolved
 
 // The description is passed in (not looked up by key) so that each call site stays monomorphic.
 function term(key: BudgetTermKey, description: TermDescription, valueDb: number): BudgetTerm {
-  return { key, label: description.label, valueDb, unit: description.unit, method: description.method, source: description.source };
+  // `+ 0` turns −0 (a zero loss negated) into 0, so a budget survives a JSON round trip unchanged.
+  return { key, label: description.label, valueDb: valueDb + 0, unit: description.unit, method: description.method, source: description.source };
 }
 
 /** Diffraction half-angle M²λ/(πW0) [rad]. */

@@ -129,7 +129,7 @@ export function centredGeometricLossDb(beamRadiusM: number, apertureRadiusM: num
   const openFraction = -Math.expm1(-inverseSquare * (apertureRadiusM - obscurationRadiusM) * (apertureRadiusM + obscurationRadiusM));
   if (obscurationRadiusM === 0) {
     lastCaptureFraction = openFraction;
-    return -10 * Math.log10(openFraction);
+    return -10 * Math.log10(openFraction) + 0; // + 0: no −0 when the whole beam is captured
   }
   const shadowExponent = inverseSquare * obscurationRadiusM * obscurationRadiusM;
   lastCaptureFraction = Math.exp(-shadowExponent) * openFraction;
