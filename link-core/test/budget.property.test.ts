@@ -5,7 +5,7 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { availabilityFromRecords, evaluateLink, formatZodIssues, linkMarginAtRangeDb, LinkDesignSchema, maxRange, type LinkDesignInput } from '../src/index.js';
+import { availabilityFromRecords, beamEnvelope, evaluateLink, launchBeamRadiusAtRangeM, formatZodIssues, linkMarginAtRangeDb, LinkDesignSchema, maxRange, type LinkDesignInput } from '../src/index.js';
 
 // exp(log x) can round a hair outside [min, max]: clamp so the bounds themselves stay reachable.
 const logUniform = (min: number, max: number) =>
@@ -53,6 +53,22 @@ const designArbitrary: fc.Arbitrary<LinkDesignInput> = fc.record({
 });
 
 describe('link budget properties', () => {
+  it('the beam envelope (waist and Rayleigh range from the q parameter) follows the launched beam everywhere', () => {
+    fc.assert(
+      fc.property(designArbitrary, (design) => {
+        const envelope = beamEnvelope(design, { points: 21 });
+        const { wavelengthM, waistRadiusM, halfAngleDivergenceRad, m2 } = design.transmitter;
+        envelope.distanceM.forEach((distanceM, i) => {
+          const expected = launchBeamRadiusAtRangeM(wavelengthM, waistRadiusM, halfAngleDivergenceRad ?? 0, m2 ?? 1, distanceM);
+          expect(Math.abs(envelope.beamRadiusM[i]! / expected - 1)).toBeLessThan(1e-9);
+        });
+        expect(envelope.waistRadiusM).toBeLessThanOrEqual(waistRadiusM * (1 + 1e-12));
+        expect(envelope.waistPositionM).toBeLessThanOrEqual(0);
+      }),
+      { numRuns: 300 },
+    );
+  });
+
   it('availability from records counts exactly the records whose own budget falls below the requirement', () => {
     fc.assert(
       fc.property(
