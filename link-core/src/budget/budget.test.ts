@@ -143,6 +143,12 @@ describe('evaluateLink', () => {
     expect(Math.abs(budgetOutage.pointingLossDb / exactLossDb - 1)).toBeLessThan(1e-6);
   });
 
+  it('flags the small-receiver pointing model when the aperture is not small against the beam', () => {
+    expect(evaluateLink(lb01).checks.map((check) => check.key)).not.toContain('pointing-small-receiver-approximation');
+    const short = evaluateLink(variant((design) => (design.rangeM = 60)));
+    expect(short.checks.map((check) => check.key)).toContain('pointing-small-receiver-approximation');
+  });
+
   it('gives the same margin through linkMarginAtRangeDb', () => {
     expect(linkMarginAtRangeDb(lb01, 2000)).toBeCloseTo(budget.linkMarginDb, 12);
   });

@@ -19,8 +19,21 @@ function diffractionHalfAngle(design: ResolvedDesign): number {
   return (design.m2 * design.wavelengthM) / (Math.PI * design.apertureBeamRadiusM);
 }
 
-function collectChecks(design: ResolvedDesign, receivedPowerDbm: number, diffractionRad: number): BudgetCheck[] {
+/** Above this aperture-radius-to-beam-radius ratio the small-receiver pointing model is flagged. */
+const SMALL_RECEIVER_RATIO_LIMIT = 0.3;
+
+function collectChecks(design: ResolvedDesign, receivedPowerDbm: number, diffractionRad: number, beamRadiusAtReceiverM: number): BudgetCheck[] {
   const checks: BudgetCheck[] = [];
+  const apertureOverBeam = design.apertureDiameterM / 2 / beamRadiusAtReceiverM;
+  if (apertureOverBeam > SMALL_RECEIVER_RATIO_LIMIT && (design.jitterSigmaPerAxisRad > 0 || design.staticErrorRad > 0)) {
+    // The pointing term multiplies the on-axis capture by exp(−2r²/W²), exact only for a ≪ W
+    // (Farid & Hranilovic 2007 quantify the finite-aperture case).
+    checks.push({
+      key: 'pointing-small-receiver-approximation',
+      severity: 'info',
+      message: `The receive aperture is not small against the beam (a/W = ${apertureOverBeam.toFixed(2)}): the pointing loss uses the small-receiver model and is approximate here.`,
+    });
+  }
   if (design.halfAngleDivergenceRad > 0 && design.halfAngleDivergenceRad <= diffractionRad) {
     checks.push({
       key: 'divergence-below-diffraction-limit',
@@ -116,7 +129,7 @@ export function evaluateLink(design: LinkDesignInput): LinkBudget {
     scintillationFadeMarginDb: chain.scintillationFadeMarginDb,
     systemMarginDb: resolved.systemMarginDb,
     linkMarginDb: chain.linkMarginDb,
-    checks: collectChecks(resolved, chain.receivedPowerDbm, diffractionRad),
+    checks: collectChecks(resolved, chain.receivedPowerDbm, diffractionRad, chain.beamRadiusAtReceiverM),
   };
 }
 
