@@ -59,7 +59,11 @@ export const LinkBudgetSchema = z.object({
   halfAngleDivergenceRad: finiteNumber(),
   /** diffraction-limited half-angle M²λ/(πW0) [rad] */
   diffractionHalfAngleRad: finiteNumber(),
-  /** Rayleigh range πW0²/(M²λ) of a beam with its waist at the aperture [m] */
+  /**
+   * Rayleigh range πW0²/(M²λ) of the collimated launch, i.e. a beam with its waist at the aperture [m]
+   * (how far this aperture could keep a beam near W0). A defocused beam has a virtual waist behind
+   * the aperture with a much shorter Rayleigh range: beamEnvelope reports both.
+   */
   rayleighRangeM: finiteNumber(),
   /** 1/e² beam radius at the receiver W(L) [m] */
   beamRadiusAtReceiverM: finiteNumber(),
