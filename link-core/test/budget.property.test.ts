@@ -43,7 +43,7 @@ const designArbitrary: fc.Arbitrary<LinkDesignInput> = fc.record({
     { requiredKeys: ['jitterSigmaPerAxisRad', 'staticErrorRad'] },
   ),
   atmosphere: fc.record({
-    model: fc.constantFrom('kim' as const, 'kruse' as const),
+    model: fc.constantFrom('kim' as const, 'kruse' as const, 'al-naboulsi-advection' as const, 'al-naboulsi-radiation' as const),
     visibilityM: logUniform(1, 1e6),
     visibilityDefinition: fc.constantFrom('contrast-2-percent' as const, 'mor-5-percent' as const),
     cn2: fc.oneof(fc.constant(0), logUniform(1e-18, 1e-10)),

@@ -4,9 +4,9 @@
  * the link fails when the visibility attenuation exceeds the clear-air margin; scintillation is left
  * out because dense fog and strong turbulence rarely coincide.
  */
-import { visibility2PercentForAttenuationKm, VISIBILITY_2_PERCENT_PER_MOR, VISIBILITY_REFERENCE_WAVELENGTH_M } from '../atmosphere/visibility-attenuation.js';
+import { VISIBILITY_2_PERCENT_PER_MOR, VISIBILITY_REFERENCE_WAVELENGTH_M } from '../atmosphere/visibility-attenuation.js';
 import type { LinkDesignInput, VisibilityDefinition } from '../schemas/link-design.schema.js';
-import { evaluateChain, resolveDesign, specificAttenuationDbPerKm, type ResolvedDesign } from './link-chain.js';
+import { evaluateChain, resolveDesign, specificAttenuationDbPerKm, visibility2PercentForAttenuationOfDesignKm, type ResolvedDesign } from './link-chain.js';
 
 const HOURS_PER_YEAR = 8766; // 365.25 days
 // Clamp of the atmosphere module's visibility inverse [km] (1 m … 1000 km).
@@ -114,7 +114,7 @@ function climatologyProbabilityBelow(climatology: VisibilityClimatology, visibil
  * @param climatology cumulative visibility distribution (levels [m], probabilities in (0, 1])
  * @param options required margin [dB] (default 0)
  * @returns clear-air margin [dB], tolerable attenuation [dB/km], V_min [m], unavailability and availability
- * @throws RangeError for a malformed table or a wavelength below 550 nm (γ is not monotone in V there)
+ * @throws RangeError for a malformed table, or a Kim/Kruse design below 550 nm (γ is not monotone in V there)
  * @see Kim I.I., Korevaar E., Proc. SPIE 4530, 84–95 (2001); log-log interpolation is common practice.
  */
 export function availabilityFromClimatology(
@@ -124,7 +124,7 @@ export function availabilityFromClimatology(
 ): ClimatologyAvailability {
   validateClimatology(climatology);
   const resolved = resolveDesign(design);
-  if (resolved.wavelengthM < VISIBILITY_REFERENCE_WAVELENGTH_M) {
+  if (resolved.fogNumeratorPerKm === 0 && resolved.wavelengthM < VISIBILITY_REFERENCE_WAVELENGTH_M) {
     throw new RangeError('transmitter.wavelengthM: availability from visibility needs a wavelength of at least 550 nm');
   }
   const { clearAir, allowedLossDb, maxAttenuationDbPerKm } = weatherAllowance(resolved, options.requiredMarginDb ?? 0);
@@ -139,7 +139,7 @@ export function availabilityFromClimatology(
     lookup,
   });
   if (!(allowedLossDb > 0)) return result(1, null, 'always-down');
-  const minimum2PercentM = visibility2PercentForAttenuationKm(resolved.kruse, resolved.wavelengthM, maxAttenuationDbPerKm) * 1000;
+  const minimum2PercentM = visibility2PercentForAttenuationOfDesignKm(resolved, maxAttenuationDbPerKm) * 1000;
   const minimumM = climatology.visibilityDefinition === 'mor-5-percent' ? minimum2PercentM / VISIBILITY_2_PERCENT_PER_MOR : minimum2PercentM;
   const { probability, lookup } = climatologyProbabilityBelow(climatology, minimumM);
   return result(Math.min(1, probability), minimumM, lookup);
@@ -213,11 +213,11 @@ export function availabilityFromRecords(design: LinkDesignInput, records: Visibi
   // comparison per record. Otherwise (or when V_min sits on the inverse's clamp) every record's
   // attenuation is evaluated.
   let threshold2PercentKm = Number.NaN;
-  if (resolved.wavelengthM >= VISIBILITY_REFERENCE_WAVELENGTH_M) {
+  if (resolved.fogNumeratorPerKm > 0 || resolved.wavelengthM >= VISIBILITY_REFERENCE_WAVELENGTH_M) {
     if (!(maxAttenuationDbPerKm > 0)) threshold2PercentKm = Infinity;
     else {
-      const inverse = visibility2PercentForAttenuationKm(resolved.kruse, resolved.wavelengthM, maxAttenuationDbPerKm);
-      if (inverse > INVERSE_MIN_KM && inverse < INVERSE_MAX_KM) threshold2PercentKm = inverse;
+      const inverse = visibility2PercentForAttenuationOfDesignKm(resolved, maxAttenuationDbPerKm);
+      if (resolved.fogNumeratorPerKm > 0 || (inverse > INVERSE_MIN_KM && inverse < INVERSE_MAX_KM)) threshold2PercentKm = inverse;
     }
   }
   const byThreshold = !Number.isNaN(threshold2PercentKm);

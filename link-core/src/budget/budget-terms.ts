@@ -13,6 +13,15 @@ export interface TermDescription {
 
 const ANDREWS_PHILLIPS = 'Andrews L.C., Phillips R.L., "Laser Beam Propagation through Random Media", 2nd ed., SPIE Press (2005)';
 
+/** The atmospheric term when the design uses Al Naboulsi's fog models. */
+export const FOG_ATTENUATION_DESCRIPTION: TermDescription = {
+  label: 'Atmospheric attenuation (fog, by fog type)',
+  unit: 'dB',
+  method:
+    'β = c(λ)/V with c = 0.11478λ + 3.8367 (advection fog) or 0.18126λ² + 0.13709λ + 3.7502 (radiation fog), λ in µm, V in km; γ = 4.343·β dB/km over the path; stated for 50 m–1 km visibility and 0.69–1.55 µm',
+  source: 'Al Naboulsi M., Sizun H., de Fornel F., "Fog attenuation prediction for optical and infrared waves", Opt. Eng. 43(2), 319–329 (2004)',
+};
+
 /** The pointing term of an outage-based design (replaces the mean-loss description). */
 export const POINTING_OUTAGE_DESCRIPTION: TermDescription = {
   label: 'Pointing error (at the outage probability)',

@@ -86,6 +86,22 @@ describe('evaluateLink', () => {
     expect(mor.checks.map((check) => check.key)).toContain('visibility-converted-from-mor');
   });
 
+  it("uses Al Naboulsi's fog models by fog type (ATT-NABOULSI-850-V0.2: 85.43 / 86.81 dB/km)", () => {
+    const fog = (model: 'al-naboulsi-advection' | 'al-naboulsi-radiation', visibilityM: number) =>
+      evaluateLink(variant((design) => {
+        design.transmitter.wavelengthM = 850e-9;
+        design.rangeM = 500;
+        design.atmosphere = { ...design.atmosphere, model, visibilityM };
+      }));
+    const advection = fog('al-naboulsi-advection', 200);
+    expect(advection.specificAttenuationDbPerKm).toBeCloseTo(85.43143556, 6);
+    expect(advection.atmosphericLossDb).toBeCloseTo(85.43143556 / 2, 6);
+    expect(advection.terms[3]!.source).toMatch(/Al Naboulsi/);
+    expect(advection.checks.map((check) => check.key)).not.toContain('fog-model-outside-validity');
+    expect(fog('al-naboulsi-radiation', 200).specificAttenuationDbPerKm).toBeCloseTo(86.80866697, 6);
+    expect(fog('al-naboulsi-advection', 5000).checks.map((check) => check.key)).toContain('fog-model-outside-validity');
+  });
+
   it('models a beam without divergence, or below the diffraction limit, as collimated', () => {
     const collimated = evaluateLink(variant((design) => delete design.transmitter.halfAngleDivergenceRad));
     // w(L) = w0·sqrt(1 + (L/z_R)²), z_R = πw0²/λ (Kogelnik & Li 1966)
@@ -198,6 +214,17 @@ describe('availability', () => {
     const twoPercent = availabilityFromClimatology(oneKm, climatology);
     const mor = availabilityFromClimatology(oneKm, { ...climatology, visibilityDefinition: 'mor-5-percent' });
     expect(mor.minimumVisibilityM! * 1.305865361).toBeCloseTo(twoPercent.minimumVisibilityM!, 4);
+  });
+
+  it("inverts Al Naboulsi's fog model in closed form: at V_min the fog takes exactly the clear-air margin", () => {
+    const fogDesign = variant((design) => {
+      design.rangeM = 1000;
+      design.scintillation = { include: false, probability: 1e-3 };
+      design.atmosphere = { ...design.atmosphere, model: 'al-naboulsi-radiation' };
+    });
+    const result = availabilityFromClimatology(fogDesign, climatology);
+    const atMinimum = evaluateLink({ ...fogDesign, atmosphere: { ...fogDesign.atmosphere, visibilityM: result.minimumVisibilityM! } });
+    expect(atMinimum.linkMarginDb).toBeCloseTo(0, 9);
   });
 
   it('reports a link that never closes', () => {

@@ -5,7 +5,7 @@
 import { coherenceRadiusM } from '../turbulence/rytov.js';
 import type { BudgetCheck, BudgetTerm, BudgetTermKey, LinkBudget } from '../schemas/link-budget.schema.js';
 import type { LinkDesignInput } from '../schemas/link-design.schema.js';
-import { POINTING_OUTAGE_DESCRIPTION, TERM_DESCRIPTIONS, type TermDescription } from './budget-terms.js';
+import { FOG_ATTENUATION_DESCRIPTION, POINTING_OUTAGE_DESCRIPTION, TERM_DESCRIPTIONS, type TermDescription } from './budget-terms.js';
 import { evaluateChain, resolveDesign, specificAttenuationDbPerKm, type ResolvedDesign } from './link-chain.js';
 
 // The description is passed in (not looked up by key) so that each call site stays monomorphic.
@@ -62,6 +62,16 @@ function collectChecks(design: ResolvedDesign, receivedPowerDbm: number, diffrac
       message: "Below 6 km visibility Kruse's wavelength dependence is not supported by fog measurements (Pierce et al., 2001); Kim's model is preferred.",
     });
   }
+  if (
+    design.fogNumeratorPerKm > 0 &&
+    (design.visibility2PercentKm < 0.05 || design.visibility2PercentKm > 1 || design.wavelengthM < 0.69e-6 || design.wavelengthM > 1.55e-6)
+  ) {
+    checks.push({
+      key: 'fog-model-outside-validity',
+      severity: 'warning',
+      message: "Al Naboulsi's fog models are stated for 50 m–1 km visibility and 0.69–1.55 µm; this design lies outside that range, so the atmospheric term is an extrapolation (Kim's model covers haze and clear air).",
+    });
+  }
   if (design.fieldOfViewRad !== undefined && design.cn2 > 0) {
     // Turbulence blur of the focused spot ≈ λ/ρ0 (DOMAIN §6.3); the field of view should exceed it.
     const rho0 = coherenceRadiusM({ cn2: design.cn2, wavelengthM: design.wavelengthM, distanceM: design.rangeM, wave: 'spherical' });
@@ -102,7 +112,7 @@ export function evaluateLink(design: LinkDesignInput): LinkBudget {
     term('transmitPower', TERM_DESCRIPTIONS.transmitPower, resolved.powerDbm),
     term('transmitOptics', TERM_DESCRIPTIONS.transmitOptics, -resolved.transmitOpticsLossDb),
     term('geometricSpread', TERM_DESCRIPTIONS.geometricSpread, -chain.geometricLossDb),
-    term('atmosphericAttenuation', TERM_DESCRIPTIONS.atmosphericAttenuation, -chain.atmosphericLossDb),
+    term('atmosphericAttenuation', resolved.fogNumeratorPerKm > 0 ? FOG_ATTENUATION_DESCRIPTION : TERM_DESCRIPTIONS.atmosphericAttenuation, -chain.atmosphericLossDb),
     term('pointingLoss', outagePointing ? POINTING_OUTAGE_DESCRIPTION : TERM_DESCRIPTIONS.pointingLoss, -chain.pointingLossDb),
     term('receiveOptics', TERM_DESCRIPTIONS.receiveOptics, -resolved.receiveOpticsLossDb),
     term('receiverSensitivity', TERM_DESCRIPTIONS.receiverSensitivity, -resolved.sensitivityDbm),

@@ -4,10 +4,11 @@
  * resolved into plain numbers (defaults applied with `??`, no zod parse), then the chain is
  * evaluated for any range and specific attenuation.
  */
-import { VISIBILITY_2_PERCENT_PER_MOR, visibilityExtinctionPerKmFast } from '../atmosphere/visibility-attenuation.js';
+import { alNaboulsiFogExtinctionPerKm } from '../atmosphere/fog-and-precipitation.js';
+import { VISIBILITY_2_PERCENT_PER_MOR, visibility2PercentForAttenuationKm, visibilityExtinctionPerKmFast } from '../atmosphere/visibility-attenuation.js';
 import { launchBeamRadiusAtRangeM } from '../beam/launch.js';
 import { meanPointingLossDb, requiredThresholdOverSigma } from '../pointing/pointing.js';
-import { LINK_DESIGN_DEFAULTS, type LinkDesignInput } from '../schemas/link-design.schema.js';
+import { LINK_DESIGN_DEFAULTS, type AtmosphereModel, type LinkDesignInput } from '../schemas/link-design.schema.js';
 import { apertureAveragedFadeMarginDb, apertureAveragedScintillationIndexFast } from '../turbulence/scintillation.js';
 import { normalQuantileOf } from '../turbulence/normal.js';
 import { rytovVarianceFast } from '../turbulence/rytov.js';
@@ -37,7 +38,15 @@ export interface ResolvedDesign {
    * since bias and jitter both scale with L); NaN for the mean-loss model
    */
   pointingOutageAngleRad: number;
+  /** visibility model of the design */
+  atmosphereModel: AtmosphereModel;
+  /** Kruse's exponent (Kim's otherwise) for the Kim/Kruse family */
   kruse: boolean;
+  /**
+   * Al Naboulsi fog: the numerator c of β = c/V [1/km·km] at this wavelength (0 for Kim/Kruse), so
+   * that γ = 4.343·c/V and its inverse is closed form
+   */
+  fogNumeratorPerKm: number;
   /** 2 % contrast visibility [km] after any MOR conversion */
   visibility2PercentKm: number;
   morInput: boolean;
@@ -67,10 +76,22 @@ function outageAngleRad(jitterSigmaPerAxisRad: number, staticErrorRad: number, o
 /** Above this bias/jitter ratio the outage radius uses the Gaussian limit of the Rician tail. */
 const LARGE_OFFSET_OVER_SIGMA = 100;
 
+/**
+ * Numerator of Al Naboulsi's fog extinction β = c/V (λ in µm, V in km): advection
+ * c = 0.11478λ + 3.8367, radiation c = 0.18126λ² + 0.13709λ + 3.7502; 0 for the other models.
+ * @see Al Naboulsi M., Sizun H., de Fornel F., Opt. Eng. 43(2), 319–329 (2004).
+ */
+function alNaboulsiNumerator(model: AtmosphereModel, wavelengthM: number): number {
+  const fogType = model === 'al-naboulsi-advection' ? 'advection' : model === 'al-naboulsi-radiation' ? 'radiation' : undefined;
+  // β·V at V = 1 km from the atmosphere module, so the coefficients live in one place.
+  return fogType === undefined ? 0 : alNaboulsiFogExtinctionPerKm({ fogType, visibilityM: 1000, wavelengthM });
+}
+
 /** Applies the schema defaults with `??` (the hot path never parses). */
 export function resolveDesign(design: LinkDesignInput): ResolvedDesign {
   const { transmitter, receiver, pointing, atmosphere } = design;
   const morInput = atmosphere.visibilityDefinition === 'mor-5-percent';
+  const model = atmosphere.model ?? LINK_DESIGN_DEFAULTS.atmosphereModel;
   const visibilityM = morInput ? atmosphere.visibilityM * VISIBILITY_2_PERCENT_PER_MOR : atmosphere.visibilityM;
   return {
     rangeM: design.rangeM,
@@ -90,7 +111,9 @@ export function resolveDesign(design: LinkDesignInput): ResolvedDesign {
     staticErrorRad: pointing.staticErrorRad,
     pointingOutageAngleRad:
       pointing.outageProbability === undefined ? Number.NaN : outageAngleRad(pointing.jitterSigmaPerAxisRad, pointing.staticErrorRad, pointing.outageProbability),
-    kruse: (atmosphere.model ?? LINK_DESIGN_DEFAULTS.atmosphereModel) === 'kruse',
+    atmosphereModel: model,
+    kruse: model === 'kruse',
+    fogNumeratorPerKm: alNaboulsiNumerator(model, transmitter.wavelengthM),
     visibility2PercentKm: visibilityM / 1000,
     morInput,
     cn2: atmosphere.cn2,
@@ -108,7 +131,21 @@ export function resolveDesign(design: LinkDesignInput): ResolvedDesign {
  * @see Kim, McArthur & Korevaar, Proc. SPIE 4214 (2001); Kruse et al. (1962).
  */
 export function specificAttenuationDbPerKm(design: ResolvedDesign, visibility2PercentKm: number): number {
+  if (design.fogNumeratorPerKm > 0) return (DB_PER_NEPER_POWER * design.fogNumeratorPerKm) / visibility2PercentKm;
   return DB_PER_NEPER_POWER * visibilityExtinctionPerKmFast(design.kruse, visibility2PercentKm, design.wavelengthM);
+}
+
+/**
+ * Inverse of {@link specificAttenuationDbPerKm}: the 2 % visibility at which γ reaches the given value.
+ * Closed form for Al Naboulsi (γ ∝ 1/V); bisection on log V for Kim/Kruse (λ ≥ 550 nm, clamped to 1 m…1000 km).
+ * @param design resolved design
+ * @param attenuationDbPerKm γ [dB/km], > 0
+ * @returns 2 % visibility [km]
+ * @see Kim & Korevaar, Proc. SPIE 4530 (2001); Al Naboulsi et al. (2004).
+ */
+export function visibility2PercentForAttenuationOfDesignKm(design: ResolvedDesign, attenuationDbPerKm: number): number {
+  if (design.fogNumeratorPerKm > 0) return (DB_PER_NEPER_POWER * design.fogNumeratorPerKm) / attenuationDbPerKm;
+  return visibility2PercentForAttenuationKm(design.kruse, design.wavelengthM, attenuationDbPerKm);
 }
 
 /**

@@ -64,7 +64,7 @@ describe('LinkDesignSchema', () => {
     ['pointing.jitterSigmaPerAxisRad', -1e-6, 'must be at least 0'],
     ['atmosphere.visibilityM', 0, 'must be greater than 0'],
     ['atmosphere.cn2', -1e-14, 'must be at least 0 m^(−2/3)'],
-    ['atmosphere.model', 'fog', 'must be one of kim, kruse'],
+    ['atmosphere.model', 'fog', 'must be one of kim, kruse, al-naboulsi-advection, al-naboulsi-radiation'],
     ['atmosphere.visibilityDefinition', '5%', 'must be one of contrast-2-percent, mor-5-percent'],
     ['scintillation.probability', 0, 'probability must be between 0 and 1 (exclusive)'],
     ['pointing.outageProbability', 1, 'probability must be between 0 and 1 (exclusive)'],

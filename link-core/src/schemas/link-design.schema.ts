@@ -27,8 +27,12 @@ export const LINK_DESIGN_DEFAULTS = {
   systemMarginDb: 0,
 } as const;
 
-/** Visibility-to-attenuation models available to the budget (DOMAIN §5.2–5.3). */
-export const ATMOSPHERE_MODELS = ['kim', 'kruse'] as const;
+/**
+ * Visibility-to-attenuation models available to the budget: Kim (default) and Kruse for haze and
+ * fog (DOMAIN §5.2–5.3), and Al Naboulsi's fog models by fog type, stated for 50 m–1 km visibility
+ * and 0.69–1.55 µm (DOMAIN §5.4).
+ */
+export const ATMOSPHERE_MODELS = ['kim', 'kruse', 'al-naboulsi-advection', 'al-naboulsi-radiation'] as const;
 export type AtmosphereModel = (typeof ATMOSPHERE_MODELS)[number];
 
 /**
