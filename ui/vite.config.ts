@@ -32,6 +32,7 @@ export default defineConfig({
     setupFiles: ['./vitest.setup.ts'],
     include: ['src/**/*.test.{ts,tsx}'],
     css: false,
+    testTimeout: 30_000,
     server: { deps: { inline: [/@fluentui/] } },
   },
 });

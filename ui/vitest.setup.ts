@@ -1,6 +1,9 @@
 import '@testing-library/jest-dom/vitest';
 import { afterEach } from 'vitest';
-import { cleanup } from '@testing-library/react';
+import { cleanup, configure } from '@testing-library/react';
+
+// Two shared cores and a full Fluent tree: give asynchronous queries room before failing.
+configure({ asyncUtilTimeout: 5000 });
 
 afterEach(() => {
   cleanup();
