@@ -19,6 +19,7 @@ import {
   DEFAULT_ENV, ROOT_DIR, WORKSPACES, ensureChromium, ensureNodeModules, killRunningChildren, runCommand, step,
   waitForHealth,
 } from './lib/project.mjs';
+import { countNodeTestSummary, countVitest } from './lib/test-reports.mjs';
 
 const SUITE_TIMEOUT_MS = 12 * 60_000;
 const only = process.env.TEST_ONLY ? new Set(process.env.TEST_ONLY.split(',').map((name) => name.trim())) : undefined;
@@ -53,66 +54,29 @@ async function checkStep(key, name, command, args, options = {}) {
   });
 }
 
+const reportPath = (key) => path.join(workDir, `${key}.json`);
+
 /** Runs a workspace's vitest suite with a JSON report beside the usual output and counts it. */
 async function vitestSuite(key, name, workspaceName, env) {
   step(name);
-  const report = path.join(workDir, `${key}.json`);
   const result = await runCommand('npm', [
-    'test', '-w', workspaceName, '--', '--reporter=default', '--reporter=json', `--outputFile=${report}`,
+    'test', '-w', workspaceName, '--', '--reporter=default', '--reporter=json', `--outputFile=${reportPath(key)}`,
   ], { env, timeoutMs: SUITE_TIMEOUT_MS, capture: true });
-  const counts = { passed: 0, failed: 0, skipped: 0, durationMs: result.durationMs, note: '' };
-  let json;
+  let report;
   try {
-    json = JSON.parse(fs.readFileSync(report, 'utf8'));
+    report = JSON.parse(fs.readFileSync(reportPath(key), 'utf8'));
   } catch {
-    json = undefined;
+    report = undefined;
   }
-  if (json) {
-    counts.passed = json.numPassedTests;
-    counts.failed = json.numFailedTests;
-    counts.skipped = json.numPendingTests + json.numTodoTests;
-    // A test file that fails to load has no tests to count: count the file itself.
-    const brokenFiles = (json.testResults ?? []).filter(
-      (file) => file.status === 'failed' && !(file.assertionResults ?? []).some((test) => test.status === 'failed'),
-    );
-    if (brokenFiles.length) {
-      counts.failed += brokenFiles.length;
-      counts.note = `${brokenFiles.length} test file(s) failed to run: ${brokenFiles.map((file) => path.relative(ROOT_DIR, file.name)).join(', ')}`;
-    }
-  }
-  if (/No test files found/i.test(result.output) || (json && json.numTotalTests === 0 && !(json.testResults ?? []).length)) {
-    counts.failed = Math.max(counts.failed, 1);
-    counts.note = 'no test files found in this workspace';
-  } else if (result.code !== 0 && counts.failed === 0) {
-    counts.failed = 1;
-    counts.note = result.timedOut ? 'timed out' : `vitest exited ${result.code} without a readable report`;
-  } else if (result.code === 0 && !json) {
-    counts.failed = 1;
-    counts.note = 'vitest passed but wrote no JSON report: tests could not be counted';
-  }
-  return record(key, name, counts);
-}
-
-/** Counts node:test results from its TAP (`# pass N`) or spec (`ℹ pass N`) summary lines. */
-function countNodeTest(output) {
-  const read = (word) => {
-    const matches = [...output.matchAll(new RegExp(`^\\s*(?:#|\u2139)\\s+${word}\\s+(\\d+)\\s*$`, 'gm'))];
-    return matches.length ? matches.reduce((sum, match) => sum + Number(match[1]), 0) : undefined;
-  };
-  const passed = read('pass');
-  const failed = read('fail');
-  if (passed === undefined && failed === undefined) return undefined;
-  return {
-    passed: passed ?? 0,
-    failed: (failed ?? 0) + (read('cancelled') ?? 0),
-    skipped: (read('skipped') ?? 0) + (read('todo') ?? 0),
-  };
+  const counts = countVitest({ report, exitCode: result.code, output: result.output, timedOut: result.timedOut });
+  counts.note = counts.note.replaceAll(`${ROOT_DIR}/`, '');
+  return record(key, name, { ...counts, durationMs: result.durationMs });
 }
 
 async function nodeTestSuite(key, name, command, args, options) {
   step(name);
   const result = await runCommand(command, args, { timeoutMs: SUITE_TIMEOUT_MS, capture: true, ...options });
-  const counts = countNodeTest(result.output);
+  const counts = countNodeTestSummary(result.output);
   if (!counts) {
     return record(key, name, {
       failed: 1, durationMs: result.durationMs,
