@@ -28,7 +28,7 @@ export const DEFAULT_ENV = {
   DATABASE_HOST: '127.0.0.1',
   DATABASE_PORT: '54329',
   DATABASE_USER: 'beamwright',
-  DATABASE_PASSWORD: 'beamwright',
+  DATABASE_PASSWORD: 'beamwright-local',
   DATABASE_NAME: 'beamwright',
   JWT_EXPIRES_IN: '8h',
   DEMO_PASSWORD: 'demo-pass-2026',
