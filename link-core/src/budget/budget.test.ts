@@ -161,7 +161,11 @@ describe('evaluateLink', () => {
 
   it('flags the small-receiver pointing model when the aperture is not small against the beam', () => {
     expect(evaluateLink(lb01).checks.map((check) => check.key)).not.toContain('pointing-small-receiver-approximation');
-    const short = evaluateLink(variant((design) => (design.rangeM = 60)));
+    const short = evaluateLink(variant((design) => {
+      design.rangeM = 60;
+      design.pointing.jitterSigmaPerAxisRad = 1e-3;
+    }));
+    expect(short.pointingLossDb).toBeGreaterThan(0.1);
     expect(short.checks.map((check) => check.key)).toContain('pointing-small-receiver-approximation');
   });
 

@@ -6,7 +6,7 @@ import { coherenceRadiusM } from '../turbulence/rytov.js';
 import type { BudgetCheck, BudgetTerm, BudgetTermKey, LinkBudget } from '../schemas/link-budget.schema.js';
 import type { LinkDesignInput } from '../schemas/link-design.schema.js';
 import { FOG_ATTENUATION_DESCRIPTION, POINTING_OUTAGE_DESCRIPTION, TERM_DESCRIPTIONS, type TermDescription } from './budget-terms.js';
-import { evaluateChain, resolveDesign, specificAttenuationDbPerKm, type ResolvedDesign } from './link-chain.js';
+import { emptyResolvedDesign, evaluateChain, resolveDesign, resolveDesignInto, specificAttenuationDbPerKm, type ResolvedDesign } from './link-chain.js';
 
 // The description is passed in (not looked up by key) so that each call site stays monomorphic.
 function term(key: BudgetTermKey, description: TermDescription, valueDb: number): BudgetTerm {
@@ -22,10 +22,13 @@ function diffractionHalfAngle(design: ResolvedDesign): number {
 /** Above this aperture-radius-to-beam-radius ratio the small-receiver pointing model is flagged. */
 const SMALL_RECEIVER_RATIO_LIMIT = 0.3;
 
-function collectChecks(design: ResolvedDesign, receivedPowerDbm: number, diffractionRad: number, beamRadiusAtReceiverM: number): BudgetCheck[] {
+/** Pointing losses below this are too small for the model's approximation to matter [dB]. */
+const NOTICEABLE_POINTING_LOSS_DB = 0.1;
+
+function collectChecks(design: ResolvedDesign, receivedPowerDbm: number, diffractionRad: number, beamRadiusAtReceiverM: number, pointingLossDb: number): BudgetCheck[] {
   const checks: BudgetCheck[] = [];
   const apertureOverBeam = design.apertureDiameterM / 2 / beamRadiusAtReceiverM;
-  if (apertureOverBeam > SMALL_RECEIVER_RATIO_LIMIT && (design.jitterSigmaPerAxisRad > 0 || design.staticErrorRad > 0)) {
+  if (apertureOverBeam > SMALL_RECEIVER_RATIO_LIMIT && pointingLossDb > NOTICEABLE_POINTING_LOSS_DB) {
     // The pointing term multiplies the on-axis capture by exp(−2r²/W²), exact only for a ≪ W
     // (Farid & Hranilovic 2007 quantify the finite-aperture case).
     checks.push({
@@ -87,6 +90,9 @@ function collectChecks(design: ResolvedDesign, receivedPowerDbm: number, diffrac
   return checks;
 }
 
+// evaluateLink resolves into this one object: everything read from it is copied into the budget.
+const scratchDesign = emptyResolvedDesign();
+
 /**
  * Link budget and margin of a design (DOMAIN §8):
  * P_rx = P_tx − L_tx − L_geo − γ·L − L_point − L_rx [dBm]; M = P_rx − S − F_scint − M_system [dB].
@@ -102,7 +108,7 @@ function collectChecks(design: ResolvedDesign, receivedPowerDbm: number, diffrac
  * @see Kim I.I., Korevaar E., Proc. SPIE 4530, 84–95 (2001) (budget structure); each term's source is in its `source`.
  */
 export function evaluateLink(design: LinkDesignInput): LinkBudget {
-  const resolved = resolveDesign(design);
+  const resolved = resolveDesignInto(scratchDesign, design);
   const attenuation = specificAttenuationDbPerKm(resolved, resolved.visibility2PercentKm);
   const chain = evaluateChain(resolved, resolved.rangeM, attenuation, resolved.includeScintillation);
   const diffractionRad = diffractionHalfAngle(resolved);
@@ -139,7 +145,7 @@ export function evaluateLink(design: LinkDesignInput): LinkBudget {
     scintillationFadeMarginDb: chain.scintillationFadeMarginDb,
     systemMarginDb: resolved.systemMarginDb,
     linkMarginDb: chain.linkMarginDb,
-    checks: collectChecks(resolved, chain.receivedPowerDbm, diffractionRad, chain.beamRadiusAtReceiverM),
+    checks: collectChecks(resolved, chain.receivedPowerDbm, diffractionRad, chain.beamRadiusAtReceiverM, chain.pointingLossDb),
   };
 }
 

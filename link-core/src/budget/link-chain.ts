@@ -89,38 +89,75 @@ function alNaboulsiNumerator(model: AtmosphereModel, wavelengthM: number): numbe
 
 /** Applies the schema defaults with `??` (the hot path never parses). */
 export function resolveDesign(design: LinkDesignInput): ResolvedDesign {
+  return resolveDesignInto(emptyResolvedDesign(), design);
+}
+
+/** A resolved design with every field present (one object shape for the engine's hot paths). */
+export function emptyResolvedDesign(): ResolvedDesign {
+  return {
+    rangeM: 0,
+    wavelengthM: 0,
+    powerDbm: 0,
+    apertureBeamRadiusM: 0,
+    halfAngleDivergenceRad: 0,
+    m2: 1,
+    transmitOpticsLossDb: 0,
+    apertureDiameterM: 0,
+    obscurationRatio: 0,
+    sensitivityDbm: 0,
+    receiveOpticsLossDb: 0,
+    overloadDbm: undefined,
+    fieldOfViewRad: undefined,
+    jitterSigmaPerAxisRad: 0,
+    staticErrorRad: 0,
+    pointingOutageAngleRad: Number.NaN,
+    atmosphereModel: 'kim',
+    kruse: false,
+    fogNumeratorPerKm: 0,
+    visibility2PercentKm: 0,
+    morInput: false,
+    cn2: 0,
+    includeScintillation: false,
+    fadeProbability: 0,
+    systemMarginDb: 0,
+  };
+}
+
+/**
+ * Resolves a design into an existing object (evaluateLink reuses one, so that the per-call work
+ * allocates only the budget it returns).
+ */
+export function resolveDesignInto(target: ResolvedDesign, design: LinkDesignInput): ResolvedDesign {
   const { transmitter, receiver, pointing, atmosphere } = design;
   const morInput = atmosphere.visibilityDefinition === 'mor-5-percent';
   const model = atmosphere.model ?? LINK_DESIGN_DEFAULTS.atmosphereModel;
-  const visibilityM = morInput ? atmosphere.visibilityM * VISIBILITY_2_PERCENT_PER_MOR : atmosphere.visibilityM;
-  return {
-    rangeM: design.rangeM,
-    wavelengthM: transmitter.wavelengthM,
-    powerDbm: transmitter.powerDbm,
-    apertureBeamRadiusM: transmitter.waistRadiusM,
-    halfAngleDivergenceRad: transmitter.halfAngleDivergenceRad ?? 0,
-    m2: transmitter.m2 ?? LINK_DESIGN_DEFAULTS.m2,
-    transmitOpticsLossDb: transmitter.opticsLossDb,
-    apertureDiameterM: receiver.apertureDiameterM,
-    obscurationRatio: receiver.obscurationRatio ?? LINK_DESIGN_DEFAULTS.obscurationRatio,
-    sensitivityDbm: receiver.sensitivityDbm,
-    receiveOpticsLossDb: receiver.opticsLossDb,
-    overloadDbm: receiver.overloadDbm,
-    fieldOfViewRad: receiver.fieldOfViewRad,
-    jitterSigmaPerAxisRad: pointing.jitterSigmaPerAxisRad,
-    staticErrorRad: pointing.staticErrorRad,
-    pointingOutageAngleRad:
-      pointing.outageProbability === undefined ? Number.NaN : outageAngleRad(pointing.jitterSigmaPerAxisRad, pointing.staticErrorRad, pointing.outageProbability),
-    atmosphereModel: model,
-    kruse: model === 'kruse',
-    fogNumeratorPerKm: alNaboulsiNumerator(model, transmitter.wavelengthM),
-    visibility2PercentKm: visibilityM / 1000,
-    morInput,
-    cn2: atmosphere.cn2,
-    includeScintillation: design.scintillation?.include ?? LINK_DESIGN_DEFAULTS.scintillationInclude,
-    fadeProbability: design.scintillation?.probability ?? LINK_DESIGN_DEFAULTS.scintillationProbability,
-    systemMarginDb: design.systemMarginDb ?? LINK_DESIGN_DEFAULTS.systemMarginDb,
-  };
+  target.rangeM = design.rangeM;
+  target.wavelengthM = transmitter.wavelengthM;
+  target.powerDbm = transmitter.powerDbm;
+  target.apertureBeamRadiusM = transmitter.waistRadiusM;
+  target.halfAngleDivergenceRad = transmitter.halfAngleDivergenceRad ?? 0;
+  target.m2 = transmitter.m2 ?? LINK_DESIGN_DEFAULTS.m2;
+  target.transmitOpticsLossDb = transmitter.opticsLossDb;
+  target.apertureDiameterM = receiver.apertureDiameterM;
+  target.obscurationRatio = receiver.obscurationRatio ?? LINK_DESIGN_DEFAULTS.obscurationRatio;
+  target.sensitivityDbm = receiver.sensitivityDbm;
+  target.receiveOpticsLossDb = receiver.opticsLossDb;
+  target.overloadDbm = receiver.overloadDbm;
+  target.fieldOfViewRad = receiver.fieldOfViewRad;
+  target.jitterSigmaPerAxisRad = pointing.jitterSigmaPerAxisRad;
+  target.staticErrorRad = pointing.staticErrorRad;
+  target.pointingOutageAngleRad =
+    pointing.outageProbability === undefined ? Number.NaN : outageAngleRad(pointing.jitterSigmaPerAxisRad, pointing.staticErrorRad, pointing.outageProbability);
+  target.atmosphereModel = model;
+  target.kruse = model === 'kruse';
+  target.fogNumeratorPerKm = model === 'kim' || model === 'kruse' ? 0 : alNaboulsiNumerator(model, transmitter.wavelengthM);
+  target.visibility2PercentKm = (morInput ? atmosphere.visibilityM * VISIBILITY_2_PERCENT_PER_MOR : atmosphere.visibilityM) / 1000;
+  target.morInput = morInput;
+  target.cn2 = atmosphere.cn2;
+  target.includeScintillation = design.scintillation?.include ?? LINK_DESIGN_DEFAULTS.scintillationInclude;
+  target.fadeProbability = design.scintillation?.probability ?? LINK_DESIGN_DEFAULTS.scintillationProbability;
+  target.systemMarginDb = design.systemMarginDb ?? LINK_DESIGN_DEFAULTS.systemMarginDb;
+  return target;
 }
 
 /**
