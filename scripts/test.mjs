@@ -32,7 +32,7 @@ const startedAt = Date.now();
 const workDir = fs.mkdtempSync(path.join(os.tmpdir(), 'bw-test-'));
 let cluster;
 let server;
-let cleanedUp = false;
+let cleanUpRun;
 let interrupted = false;
 
 function record(key, name, { passed = 0, failed = 0, skipped = 0, durationMs = 0, note = '' }) {
@@ -98,14 +98,17 @@ async function stopServer() {
   clearTimeout(timer);
 }
 
-async function cleanUp() {
-  if (cleanedUp) return;
-  cleanedUp = true;
-  killRunningChildren('SIGKILL');
-  await stopServer().catch(() => {});
-  await cluster?.remove().catch((error) => process.stderr.write(`could not remove the test cluster: ${error.message}\n`));
-  fs.rmSync(workDir, { recursive: true, force: true });
+/** Ends children, the server and the throwaway cluster; every caller awaits the same run. */
+function cleanUp() {
+  cleanUpRun ??= (async () => {
+    killRunningChildren('SIGKILL');
+    await stopServer().catch(() => {});
+    await cluster?.remove().catch((error) => process.stderr.write(`could not remove the test cluster: ${error.message}\n`));
+    fs.rmSync(workDir, { recursive: true, force: true });
+  })();
+  return cleanUpRun;
 }
+process.on('exit', () => fs.rmSync(workDir, { recursive: true, force: true }));
 
 for (const signal of ['SIGINT', 'SIGTERM', 'SIGHUP']) {
   process.on(signal, () => {
@@ -178,6 +181,7 @@ async function main() {
 
   if (selected('typecheck')) {
     for (const workspace of WORKSPACES) {
+      if (interrupted) break;
       await checkStep('typecheck', `typecheck ${workspace.dir}`, 'npm', ['run', 'typecheck', '-w', workspace.name]);
     }
   }
@@ -251,6 +255,7 @@ async function browserSuite(testEnv, wantedPort) {
     ['seed (browser database)', ['run', 'seed', '-w', '@beamwright/api']],
   ];
   for (const [name, args] of prerequisites) {
+    if (interrupted) return;
     const row = await checkStep('browser', name, 'npm', args, { env });
     if (row.failed) {
       record('browser', 'ui browser tests', { failed: 1, note: `not run: ${name} failed` });
