@@ -1,9 +1,10 @@
-import { z } from 'zod';
+// zod/mini: the same validation with a fraction of the weight on the first screen.
+import * as z from 'zod/mini';
 
 // Vite exposes only VITE_* variables to the browser; parse them once so a typo fails at start-up.
 const EnvSchema = z.object({
   // The api serves the UI from the same origin, so a relative base is the default.
-  API_URL: z.string().min(1).default('/api'),
+  API_URL: z._default(z.string().check(z.minLength(1)), '/api'),
 });
 
 function readEnv() {

@@ -23,6 +23,7 @@ export function formatDbm(valueDbm: number | null | undefined, digits = 1): stri
 /** Ranges: metres below 1 km, kilometres with 2–3 significant decimals above. */
 export function formatDistance(valueM: number | null | undefined): string {
   if (valueM === null || valueM === undefined || !Number.isFinite(valueM)) return '—';
+  if (valueM === 0) return '0 m';
   if (Math.abs(valueM) < 1000) return `${fixed(valueM, Math.abs(valueM) < 10 ? 2 : 0)} m`;
   const km = valueM / 1000;
   return `${fixed(km, km < 10 ? 3 : 2)} km`;

@@ -37,6 +37,7 @@ export const QUANTITY_FIELD_IDS = [
   'receiver.fieldOfViewRad',
   'pointing.jitterSigmaPerAxisRad',
   'pointing.staticErrorRad',
+  'pointing.outageProbability',
   'atmosphere.visibilityM',
   'atmosphere.cn2',
   'scintillation.probability',
@@ -124,6 +125,16 @@ const fields: QuantityField[] = [
     example: '100 µrad',
     hint: 'Residual misalignment after installation.',
   },
+  {
+    id: 'pointing.outageProbability',
+    label: 'Pointing outage probability',
+    section: 'pointing',
+    kind: 'fraction',
+    unit: '',
+    optional: true,
+    example: '0.001',
+    hint: 'Blank: budget the mean pointing loss. A probability budgets the loss exceeded only that often.',
+  },
   { id: 'atmosphere.visibilityM', label: 'Design visibility', section: 'atmosphere', kind: 'length', unit: 'km', example: '5 km' },
   {
     id: 'atmosphere.cn2',
@@ -181,6 +192,8 @@ export const CHOICE_FIELD_LABELS: Record<string, string> = {
 export const ATMOSPHERE_MODEL_LABELS: Record<string, string> = {
   kim: 'Kim (2001)',
   kruse: 'Kruse (1962)',
+  'al-naboulsi-advection': 'Al Naboulsi, advection fog',
+  'al-naboulsi-radiation': 'Al Naboulsi, radiation fog',
 };
 
 export const VISIBILITY_DEFINITION_LABELS: Record<string, string> = {

@@ -12,6 +12,7 @@ import {
   tokens,
 } from '@fluentui/react-components';
 import { CircleSmallFilled } from '@fluentui/react-icons';
+import { ATMOSPHERE_MODELS } from '@beamwright/link-core';
 import {
   ATMOSPHERE_MODEL_LABELS,
   QUANTITY_FIELDS,
@@ -264,11 +265,11 @@ function DesignFormView({ draft, errors, changedFieldIds, onTextChange, onUpdate
       {section(
         'atmosphere',
         <>
-          <Field label="Visibility model" hint="Kim is preferred below 6 km visibility.">
+          <Field label="Visibility model" hint="Kim is the default; the Al Naboulsi models describe a known fog type.">
             <Select value={draft.atmosphereModel} onChange={(_, data) => onUpdate({ atmosphereModel: data.value })} name="atmosphere.model">
-              {Object.entries(ATMOSPHERE_MODEL_LABELS).map(([value, label]) => (
+              {ATMOSPHERE_MODELS.map((value) => (
                 <option key={value} value={value}>
-                  {label}
+                  {ATMOSPHERE_MODEL_LABELS[value] ?? value}
                 </option>
               ))}
             </Select>
