@@ -102,10 +102,12 @@ export function NewLinkRoute() {
     <Card className={styles.card}>
       <div>
         <Title2 as="h1">New link</Title2>
-        <Body1 className={styles.muted}>
-          Name the link and give its path; it starts from typical figures of a 1550 nm rooftop terminal, to be replaced by your
-          equipment in the workspace.
-        </Body1>
+        <div>
+          <Body1 className={styles.muted}>
+            Name the link and give its path; it starts from typical figures of a 1550 nm rooftop terminal, to be replaced by your
+            equipment in the workspace.
+          </Body1>
+        </div>
       </div>
       <form onSubmit={onSubmit} noValidate style={{ display: 'grid', rowGap: 16 }} aria-label="New link">
         {errors.form && (
@@ -114,11 +116,25 @@ export function NewLinkRoute() {
           </MessageBar>
         )}
         <Field label="Link name" required validationMessage={errors.name} validationState={errors.name ? 'error' : 'none'}>
-          <Input value={name} onChange={(_, data) => setName(data.value)} maxLength={200} placeholder="e.g. Harbour office to depot" />
+          <Input
+            value={name}
+            onChange={(_, data) => {
+              setName(data.value);
+              setErrors((current) => ({ ...current, name: undefined }));
+            }}
+            maxLength={200}
+            placeholder="e.g. Harbour office to depot"
+          />
         </Field>
         <div className={styles.row}>
           <Field label="Site A" validationMessage={errors.siteAId} validationState={errors.siteAId ? 'error' : 'none'} hint="Optional">
-            <Select value={siteAId} onChange={(_, data) => setSiteAId(data.value)}>
+            <Select
+              value={siteAId}
+              onChange={(_, data) => {
+                setSiteAId(data.value);
+                setErrors((current) => ({ ...current, siteAId: undefined, siteBId: undefined, rangeM: undefined }));
+              }}
+            >
               <option value="">No site yet</option>
               {sites.data?.map((site) => (
                 <option key={site.id} value={site.id}>
@@ -128,7 +144,13 @@ export function NewLinkRoute() {
             </Select>
           </Field>
           <Field label="Site B" validationMessage={errors.siteBId} validationState={errors.siteBId ? 'error' : 'none'} hint="Optional">
-            <Select value={siteBId} onChange={(_, data) => setSiteBId(data.value)}>
+            <Select
+              value={siteBId}
+              onChange={(_, data) => {
+                setSiteBId(data.value);
+                setErrors((current) => ({ ...current, siteAId: undefined, siteBId: undefined, rangeM: undefined }));
+              }}
+            >
               <option value="">No site yet</option>
               {sites.data?.map((site) => (
                 <option key={site.id} value={site.id}>
@@ -145,7 +167,13 @@ export function NewLinkRoute() {
           validationState={errors.rangeM ? 'error' : 'none'}
           hint={geometry ? `From the two sites: ${formatDistance(geometry.slantRangeM)} slant range. Type a value to override it.` : 'e.g. 2.4 km or 850 m'}
         >
-          <Input value={rangeText} onChange={(_, data) => setRangeText(data.value)} placeholder={geometry ? formatDistance(geometry.slantRangeM) : 'e.g. 2.4 km'} />
+          <Input
+            value={rangeText}
+            onChange={(_, data) => {
+              setRangeText(data.value);
+              setErrors((current) => ({ ...current, rangeM: undefined }));
+            }}
+            placeholder={geometry ? formatDistance(geometry.slantRangeM) : 'e.g. 2.4 km'} />
         </Field>
         <Caption1 className={styles.muted}>The starting figures are illustrative, not a recommendation.</Caption1>
         <div className={styles.actions}>

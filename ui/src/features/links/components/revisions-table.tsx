@@ -1,4 +1,4 @@
-import { Badge, Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, Text, makeStyles, tokens } from '@fluentui/react-components';
+import { Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, Text, makeStyles, tokens } from '@fluentui/react-components';
 import { CheckmarkStarburstRegular } from '@fluentui/react-icons';
 import type { RevisionSummary } from '@/features/links/api/types';
 import { MarginBadge } from '@/components/ui/margin-verdict';
@@ -8,6 +8,8 @@ const useStyles = makeStyles({
   number: { fontVariantNumeric: 'tabular-nums', whiteSpace: 'nowrap' },
   note: { whiteSpace: 'pre-wrap', maxWidth: '420px' },
   muted: { color: tokens.colorNeutralForeground3 },
+  approval: { display: 'inline-flex', columnGap: tokens.spacingHorizontalXS, alignItems: 'flex-start' },
+  approvalIcon: { color: tokens.colorPaletteGreenForeground1, fontSize: '18px', flexShrink: 0, marginTop: '2px' },
 });
 
 /** Every revision of a link, newest first. */
@@ -46,9 +48,14 @@ export function RevisionsTable({ revisions }: { revisions: RevisionSummary[] }) 
             </TableCell>
             <TableCell>
               {revision.approval ? (
-                <Badge appearance="tint" color="success" icon={<CheckmarkStarburstRegular />}>
-                  {revision.approval.by.displayName}, {formatDateTime(revision.approval.at)}
-                </Badge>
+                <span className={styles.approval}>
+                  <CheckmarkStarburstRegular className={styles.approvalIcon} aria-label="Approved" />
+                  <span>
+                    {revision.approval.by.displayName}
+                    <br />
+                    <span className={styles.muted}>{formatDateTime(revision.approval.at)}</span>
+                  </span>
+                </span>
               ) : (
                 <span className={styles.muted}>—</span>
               )}
