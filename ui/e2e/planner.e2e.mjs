@@ -79,6 +79,12 @@ describe('the planner', () => {
     savedRevision = nextRevision;
     assert.match(await textOf(page.getByTestId('edit-status')), new RegExp(`No unsaved changes to revision ${nextRevision}`));
 
+    // the same screen in the dark theme, remembered until switched back
+    await page.getByTestId('theme-toggle').click();
+    await page.waitForTimeout(400);
+    await screenshot(page, 'workspace-engineer-dark');
+    await page.getByTestId('theme-toggle').click();
+
     await page.getByRole('button', { name: 'History and review' }).click();
     const row = page.locator(`[data-testid="revisions-table"] [data-revision="${nextRevision}"]`);
     await row.waitFor();
@@ -87,6 +93,67 @@ describe('the planner', () => {
     await diff.waitFor();
     assert.match(await textOf(diff), /Path length/);
     await screenshot(page, 'history-engineer');
+  });
+
+  it('turns a save conflict into a field-by-field comparison and re-applies the engineer’s edits', async () => {
+    const { page } = browser;
+    assert.ok(linkUrl, 'the first step opened a link');
+    await page.goto(linkUrl);
+    await page.getByTestId('design-results').waitFor();
+    const linkId = new URL(linkUrl).pathname.split('/').pop();
+    const pathLength = page.locator('main input[name="rangeM"]');
+    const metres = readMetres(await pathLength.inputValue());
+    const editedKm = Math.round((metres * 0.9) / 10) / 100;
+    await pathLength.fill(`${editedKm} km`);
+
+    // Meanwhile the administrator saves a revision of the same link through the api.
+    const login = await fetch(`${BASE_URL}/api/auth/login`, {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json' },
+      body: JSON.stringify({ email: 'admin@demo.test', password: process.env.DEMO_PASSWORD ?? 'demo-pass-2026' }),
+    });
+    assert.equal(login.status, 200);
+    const { accessToken } = await login.json();
+    const headers = { Authorization: `Bearer ${accessToken}`, 'Content-Type': 'application/json' };
+    const current = await (await fetch(`${BASE_URL}/api/links/${linkId}`, { headers })).json();
+    const theirPowerDbm = current.design.transmitter.powerDbm - 1;
+    const competing = await fetch(`${BASE_URL}/api/links/${linkId}/revisions`, {
+      method: 'POST',
+      headers,
+      body: JSON.stringify({
+        baseRevision: current.revision,
+        design: { ...current.design, transmitter: { ...current.design.transmitter, powerDbm: theirPowerDbm } },
+        note: 'Transmit power lowered by 1 dB (browser test, concurrent edit)',
+      }),
+    });
+    assert.equal(competing.status, 201);
+    const theirRevision = current.revision + 1;
+
+    await page.getByRole('button', { name: `Save as revision ${theirRevision}` }).click();
+    const saveDialog = page.getByRole('dialog');
+    await saveDialog.getByLabel('Note').fill('Path corrected after the second survey (browser test)');
+    await saveDialog.getByRole('button', { name: 'Save revision' }).click();
+
+    const conflict = page.getByRole('alertdialog');
+    await conflict.getByText(`Revision ${theirRevision} was saved while you were editing`).waitFor();
+    assert.match(await textOf(conflict.getByTestId('conflict-their-changes')), /Transmit power/);
+    await page.waitForTimeout(500); // let the dialog finish fading in
+    await screenshot(page, 'workspace-save-conflict', { fullPage: false });
+    await conflict.getByRole('button', { name: `Load revision ${theirRevision} and re-apply my edits` }).click();
+    await page.getByTestId('rebase-notice').waitFor();
+    assert.equal(await pathLength.inputValue(), `${editedKm} km`, 'the typed path length survived the conflict');
+    assert.match(await page.locator('main input[name="transmitter.powerDbm"]').inputValue(), new RegExp(`^${theirPowerDbm} dBm$`));
+
+    await page.getByRole('button', { name: `Save as revision ${theirRevision + 1}` }).click();
+    assert.equal(await saveDialog.getByLabel('Note').inputValue(), 'Path corrected after the second survey (browser test)');
+    await saveDialog.getByRole('button', { name: 'Save revision' }).click();
+    await page.getByTestId('saved-notice').waitFor();
+    assert.match(await textOf(page.getByTestId('saved-notice')), new RegExp(`Saved as revision ${theirRevision + 1}\\b`));
+    savedRevision = theirRevision + 1;
+    const stored = await (await fetch(`${BASE_URL}/api/links/${linkId}`, { headers })).json();
+    assert.equal(stored.revision, savedRevision);
+    assert.equal(stored.design.transmitter.powerDbm, theirPowerDbm);
+    assert.ok(Math.abs(stored.design.rangeM - editedKm * 1000) < 1e-6);
   });
 
   it('gives the installer the design to read and no way to edit it', async () => {

@@ -52,9 +52,9 @@ export async function signIn(page, email, password = DEMO_PASSWORD) {
   await page.getByTestId('current-user').waitFor();
 }
 
-export async function screenshot(page, name) {
+export async function screenshot(page, name, { fullPage = true } = {}) {
   mkdirSync(ARTIFACTS_DIR, { recursive: true });
   const path = join(ARTIFACTS_DIR, `${name}.png`);
-  await page.screenshot({ path, fullPage: true });
+  await page.screenshot({ path, fullPage });
   return path;
 }

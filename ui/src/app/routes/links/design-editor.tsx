@@ -44,6 +44,7 @@ const useStyles = makeStyles({
   notices: { display: 'grid', rowGap: tokens.spacingVerticalS, marginBottom: tokens.spacingVerticalM },
   changes: { maxHeight: '260px', overflowY: 'auto' },
   dialogGrid: { display: 'grid', rowGap: tokens.spacingVerticalM },
+  wideDialog: { maxWidth: '760px', width: 'calc(100vw - 48px)' },
 });
 
 interface ConflictState {
@@ -249,7 +250,7 @@ export function DesignEditor({ link, historyAction }: { link: LinkDetail; histor
       </div>
 
       <Dialog open={saveOpen} onOpenChange={(_, data) => setSaveOpen(data.open)}>
-        <DialogSurface aria-describedby="save-dialog-description">
+        <DialogSurface aria-describedby="save-dialog-description" className={styles.wideDialog}>
           <DialogBody>
             <DialogTitle>Save as revision {baseRevision + 1}</DialogTitle>
             <DialogContent className={styles.dialogGrid}>
@@ -295,7 +296,7 @@ export function DesignEditor({ link, historyAction }: { link: LinkDetail; histor
       </Dialog>
 
       <Dialog open={conflict !== null} modalType="alert">
-        <DialogSurface>
+        <DialogSurface className={styles.wideDialog}>
           <DialogBody>
             <DialogTitle>Revision {conflict?.latestRevision} was saved while you were editing</DialogTitle>
             <DialogContent className={styles.dialogGrid}>
