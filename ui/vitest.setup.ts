@@ -8,6 +8,7 @@ configure({ asyncUtilTimeout: 5000 });
 afterEach(() => {
   cleanup();
   window.localStorage.clear();
+  window.sessionStorage.clear();
 });
 
 // jsdom lacks these; Fluent UI's positioning and media hooks call them.

@@ -1,4 +1,4 @@
-import { useEffect, useState, type ReactNode } from 'react';
+import { useEffect, useRef, useState, type ReactNode } from 'react';
 import { useBlocker } from 'react-router-dom';
 import { useQueryClient } from '@tanstack/react-query';
 import {
@@ -33,6 +33,7 @@ import { DesignForm } from '@/features/link-design/components/design-form';
 import { DesignResults } from '@/features/link-design/components/design-results';
 import { EyeSafetyLine } from '@/features/link-design/components/eye-safety-panel';
 import { applyReceiverSpec, applyTransmitterSpec, draftFromDesign, rebaseDraft } from '@/features/link-design/design-draft';
+import { clearStoredDraft, loadStoredDraft, storeDraft } from '@/features/link-design/draft-storage';
 import { designFieldLabel, diffDesigns, type DesignChange } from '@/features/link-design/design-diff';
 import { EquipmentPicker } from '@/features/equipment/components/equipment-picker';
 import { useWorkspaceStyles } from '@/app/routes/links/workspace-layout';
@@ -69,9 +70,33 @@ export function DesignEditor({ link, historyAction }: { link: LinkDetail; histor
   const [savedRevision, setSavedRevision] = useState<number | null>(null);
   const [conflict, setConflict] = useState<ConflictState | null>(null);
   const [rebaseNotice, setRebaseNotice] = useState<{ revision: number; reapplied: string[]; overlapping: string[] } | null>(null);
+  const [restoredNotice, setRestoredNotice] = useState(false);
   const saveRevision = useSaveRevision(link.id);
 
   const hasChanges = workspace.changedFieldIds.length > 0;
+
+  // Edits left in this tab by a reload come back, re-applied on the latest revision if it moved on.
+  const restored = useRef(false);
+  useEffect(() => {
+    if (restored.current) return;
+    restored.current = true;
+    const stored = loadStoredDraft(link.id);
+    if (!stored) return;
+    if (stored.baseRevision === link.revision) {
+      workspace.replaceDraft(stored.draft, link.design);
+    } else {
+      const result = rebaseDraft(stored.draft, stored.base, link.design);
+      workspace.replaceDraft(result.draft, link.design);
+      setRebaseNotice({ revision: link.revision, reapplied: result.reapplied, overlapping: result.overlapping });
+    }
+    setRestoredNotice(true);
+  }, [link.id, link.revision, link.design, workspace]);
+
+  useEffect(() => {
+    if (!restored.current) return;
+    if (hasChanges) storeDraft(link.id, { baseRevision, base: workspace.base, draft: workspace.draft });
+    else clearStoredDraft(link.id);
+  }, [hasChanges, link.id, baseRevision, workspace.base, workspace.draft]);
   const blocker = useBlocker(({ currentLocation, nextLocation }) => hasChanges && currentLocation.pathname !== nextLocation.pathname);
 
   // Leaving the page with unsaved edits asks first (reloads and closing the tab too).
@@ -104,6 +129,8 @@ export function DesignEditor({ link, historyAction }: { link: LinkDetail; histor
           workspace.replaceDraft(workspace.draft, saved.design);
           setBaseRevision(saved.revision);
           setSavedRevision(saved.revision);
+          clearStoredDraft(link.id);
+          setRestoredNotice(false);
           setRebaseNotice(null);
           setNote('');
           setSaveOpen(false);
@@ -156,7 +183,9 @@ export function DesignEditor({ link, historyAction }: { link: LinkDetail; histor
 
   const discard = () => {
     workspace.replaceDraft(draftFromDesign(workspace.base));
+    clearStoredDraft(link.id);
     setRebaseNotice(null);
+    setRestoredNotice(false);
   };
 
   return (
@@ -207,6 +236,12 @@ export function DesignEditor({ link, historyAction }: { link: LinkDetail; histor
         {saveError && !saveOpen && (
           <MessageBar intent="error">
             <MessageBarBody>{saveError}</MessageBarBody>
+          </MessageBar>
+        )}
+        {restoredNotice && hasChanges && (
+          <MessageBar intent="info" data-testid="restored-notice">
+            <MessageBarBody>Your unsaved edits to this link were kept in this browser tab and are back. Save them or discard them.</MessageBarBody>
+            <MessageBarActions containerAction={<Button appearance="transparent" icon={<DismissRegular />} aria-label="Dismiss" onClick={() => setRestoredNotice(false)} />} />
           </MessageBar>
         )}
         {rebaseNotice && (

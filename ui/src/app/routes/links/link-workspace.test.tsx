@@ -155,6 +155,38 @@ describe('link workspace (engineer)', () => {
   });
 });
 
+describe('unsaved edits across a reload', () => {
+  it('brings back what was typed, and re-applies it when someone saved in between', async () => {
+    mockApi(baseRoutes());
+    const first = renderApp(`/links/${LINK_ID}`);
+    await screen.findByTestId('link-margin', {}, { timeout: 8000 });
+    fireEvent.change(rangeInput(), { target: { value: '2.5 km' } });
+    await waitFor(() => expect(window.sessionStorage.getItem(`beamwright.draft.${LINK_ID}`)).toContain('2.5 km'));
+    first.unmount();
+
+    // same revision on the server: the edit simply comes back
+    mockApi(baseRoutes());
+    const second = renderApp(`/links/${LINK_ID}`);
+    expect(await screen.findByTestId('restored-notice', {}, { timeout: 8000 })).toBeInTheDocument();
+    expect(rangeInput().value).toBe('2.5 km');
+    expect(screen.getByTestId('edit-status')).toHaveTextContent('1 field changed since revision 2');
+    second.unmount();
+
+    // revision 3 appeared meanwhile: the edit is re-applied on top of it
+    const theirs = { ...workedExampleDesign, transmitter: { ...workedExampleDesign.transmitter, powerDbm: 18 } };
+    mockApi([
+      { path: '/auth/me', body: demoEngineer },
+      { path: `/links/${LINK_ID}`, body: linkDetailOf(theirs, 3) },
+      { path: '/equipment', body: emptyList },
+    ]);
+    renderApp(`/links/${LINK_ID}`);
+    expect(await screen.findByTestId('rebase-notice', {}, { timeout: 8000 })).toHaveTextContent('Now editing on top of revision 3');
+    expect(rangeInput().value).toBe('2.5 km');
+    expect(powerInput().value).toBe('18 dBm');
+    expect(screen.getByRole('button', { name: 'Save as revision 4' })).toBeEnabled();
+  });
+});
+
 describe('link workspace (read-only roles)', () => {
   it.each(['installer', 'reviewer'])('gives the %s the design without a single edit control', async (role) => {
     mockApi(baseRoutes(role));

@@ -21,7 +21,8 @@ const useStyles = makeStyles({
   info: { color: tokens.colorNeutralForeground3, flexShrink: 0, cursor: 'help' },
   subtotal: { backgroundColor: tokens.colorNeutralBackground3, fontWeight: tokens.fontWeightSemibold },
   total: { backgroundColor: tokens.colorBrandBackground2, fontWeight: tokens.fontWeightBold },
-  tip: { display: 'grid', rowGap: tokens.spacingVerticalXS, maxWidth: '420px' },
+  tip: { display: 'grid', rowGap: tokens.spacingVerticalXS },
+  tipSurface: { maxWidth: '440px' },
   tipHeading: { fontWeight: tokens.fontWeightSemibold },
   loss: { color: tokens.colorNeutralForeground1 },
 });
@@ -67,7 +68,12 @@ export function BudgetTermsTable({ budget }: { budget: LinkBudget }) {
           <Fragment key={term.key}>
             <TableRow data-term={term.key}>
               <TableCell>
-                <Tooltip content={<TermTip term={term} />} relationship="description" withArrow positioning="after">
+                <Tooltip
+                  content={{ children: <TermTip term={term} />, className: styles.tipSurface }}
+                  relationship="description"
+                  withArrow
+                  positioning="after"
+                >
                   <span className={styles.label} tabIndex={0}>
                     {term.label}
                     <InfoRegular className={styles.info} aria-hidden />
