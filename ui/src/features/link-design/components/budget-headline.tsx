@@ -13,7 +13,7 @@ const useStyles = makeStyles({
     alignItems: 'stretch',
     '@media (max-width: 700px)': { gridTemplateColumns: '1fr' },
   },
-  stats: { display: 'grid', gridTemplateColumns: 'repeat(auto-fit, minmax(170px, 1fr))', gap: tokens.spacingHorizontalS },
+  stats: { display: 'grid', gridTemplateColumns: 'repeat(2, minmax(0, 1fr))', gap: tokens.spacingHorizontalS },
   margin: {
     borderRadius: tokens.borderRadiusLarge,
     padding: tokens.spacingHorizontalL,

@@ -9,6 +9,7 @@ import {
   TableRow,
   Tooltip,
   makeStyles,
+  mergeClasses,
   tokens,
 } from '@fluentui/react-components';
 import { InfoRegular } from '@fluentui/react-icons';
@@ -17,6 +18,7 @@ import { formatDb } from '@/lib/format';
 
 const useStyles = makeStyles({
   number: { textAlign: 'end', fontVariantNumeric: 'tabular-nums', whiteSpace: 'nowrap' },
+  numberHeader: { '& .fui-TableHeaderCell__button': { justifyContent: 'flex-end' } },
   label: { display: 'flex', alignItems: 'center', columnGap: tokens.spacingHorizontalXS },
   info: { color: tokens.colorNeutralForeground3, flexShrink: 0, cursor: 'help' },
   subtotal: { backgroundColor: tokens.colorNeutralBackground3, fontWeight: tokens.fontWeightSemibold },
@@ -59,8 +61,8 @@ export function BudgetTermsTable({ budget }: { budget: LinkBudget }) {
       <TableHeader>
         <TableRow>
           <TableHeaderCell>Term</TableHeaderCell>
-          <TableHeaderCell className={styles.number}>Contribution</TableHeaderCell>
-          <TableHeaderCell className={styles.number}>Running level</TableHeaderCell>
+          <TableHeaderCell className={mergeClasses(styles.number, styles.numberHeader)}>Contribution</TableHeaderCell>
+          <TableHeaderCell className={mergeClasses(styles.number, styles.numberHeader)}>Running level</TableHeaderCell>
         </TableRow>
       </TableHeader>
       <TableBody>
