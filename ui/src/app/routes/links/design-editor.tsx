@@ -36,6 +36,7 @@ import { applyReceiverSpec, applyTransmitterSpec, draftFromDesign, rebaseDraft }
 import { clearStoredDraft, loadStoredDraft, storeDraft } from '@/features/link-design/draft-storage';
 import { designFieldLabel, diffDesigns, type DesignChange } from '@/features/link-design/design-diff';
 import { EquipmentPicker } from '@/features/equipment/components/equipment-picker';
+import { SitePathSummary } from '@/features/sites/components/site-path-summary';
 import { useWorkspaceStyles } from '@/app/routes/links/workspace-layout';
 import { DesignChangesTable as ChangesTable } from '@/features/link-design/components/design-changes-table';
 
@@ -270,6 +271,14 @@ export function DesignEditor({ link, historyAction }: { link: LinkDetail; histor
             diffractionHalfAngleRad: workspace.budget?.diffractionHalfAngleRad,
           }}
           powerNote={<EyeSafetyLine design={workspace.shownDesign} budget={workspace.budget} />}
+          pathExtras={
+            <SitePathSummary
+              siteAId={link.siteA?.id}
+              siteBId={link.siteB?.id}
+              designRangeM={workspace.shownDesign.rangeM}
+              onUseRangeM={(rangeM) => workspace.setText('rangeM', rangeM >= 1000 ? `${Number((rangeM / 1000).toPrecision(5))} km` : `${Number(rangeM.toPrecision(4))} m`)}
+            />
+          }
           transmitterExtras={<EquipmentPicker kind="transmitter" onPick={(item) => item.kind === 'transmitter' && workspace.replaceDraft(applyTransmitterSpec(workspace.draft, item.spec))} />}
           receiverExtras={<EquipmentPicker kind="receiver" onPick={(item) => item.kind === 'receiver' && workspace.replaceDraft(applyReceiverSpec(workspace.draft, item.spec))} />}
         />

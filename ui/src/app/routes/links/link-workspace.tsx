@@ -11,6 +11,7 @@ import { DesignResults } from '@/features/link-design/components/design-results'
 import { DesignEditor } from '@/app/routes/links/design-editor';
 import type { LinkDetail } from '@/features/links/api/types';
 import { useWorkspaceStyles } from '@/app/routes/links/workspace-layout';
+import { SitePathSummary } from '@/features/sites/components/site-path-summary';
 
 function HistoryButton({ linkId }: { linkId: string }) {
   return (
@@ -27,7 +28,10 @@ function DesignViewer({ link }: { link: LinkDetail }) {
     <>
       <LinkHeader link={link} actions={<HistoryButton linkId={link.id} />} />
       <div className={styles.layout}>
-        <DesignReadout design={link.design} />
+        <div style={{ display: 'grid', rowGap: 12 }}>
+          <SitePathSummary siteAId={link.siteA?.id} siteBId={link.siteB?.id} designRangeM={link.design.rangeM} />
+          <DesignReadout design={link.design} />
+        </div>
         <div className={styles.results}>
           <DesignResults design={link.design} budget={link.budget} />
         </div>

@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { Combobox, Field, Option, type ComboboxProps } from '@fluentui/react-components';
 import type { EquipmentKind, EquipmentResponse } from '@beamwright/link-core/contracts';
 import { useEquipment } from '@/features/equipment/api/get-equipment';
@@ -13,9 +14,12 @@ const KIND_WORD: Record<EquipmentKind, string> = { transmitter: 'transmitter', r
 export function EquipmentPicker({ kind, onPick }: EquipmentPickerProps) {
   const equipment = useEquipment(kind);
   const items = equipment.data ?? [];
+  const [picked, setPicked] = useState<string | null>(null);
   const onOptionSelect: ComboboxProps['onOptionSelect'] = (_, data) => {
     const item = items.find((candidate) => candidate.id === data.optionValue);
-    if (item) onPick(item);
+    if (!item) return;
+    onPick(item);
+    setPicked(item.name);
   };
   return (
     <Field
@@ -23,7 +27,9 @@ export function EquipmentPicker({ kind, onPick }: EquipmentPickerProps) {
       hint={
         equipment.isError
           ? 'The catalogue could not be loaded; type the values in.'
-          : 'Copies the model’s datasheet figures into the fields below; you can still edit them.'
+          : picked
+            ? `Fields below filled from ${picked}; later edits are yours.`
+            : 'Copies the model’s datasheet figures into the fields below; you can still edit them.'
       }
     >
       <Combobox

@@ -74,6 +74,8 @@ export interface DesignFormProps {
   /** shown at the top of the transmitter and receiver sections (the catalogue pickers) */
   transmitterExtras?: ReactNode;
   receiverExtras?: ReactNode;
+  /** shown under the path length (what the two sites say) */
+  pathExtras?: ReactNode;
 }
 
 function EditedMark({ show }: { show: boolean }) {
@@ -158,7 +160,7 @@ function DefinitionSelect({ value, onChange, label }: { value: WidthDefinition; 
   );
 }
 
-function DesignFormView({ draft, errors, changedFieldIds, onTextChange, onUpdate, resolved, powerNote, transmitterExtras, receiverExtras }: DesignFormProps) {
+function DesignFormView({ draft, errors, changedFieldIds, onTextChange, onUpdate, resolved, powerNote, transmitterExtras, receiverExtras, pathExtras }: DesignFormProps) {
   const styles = useStyles();
   const changed = (id: string) => changedFieldIds.includes(id);
   const input = (id: QuantityFieldId, props: { extra?: ReactNode; hint?: ReactNode; wide?: boolean } = {}) => (
@@ -189,7 +191,13 @@ function DesignFormView({ draft, errors, changedFieldIds, onTextChange, onUpdate
 
   return (
     <form className={styles.form} onSubmit={(event) => event.preventDefault()} aria-label="Link design" noValidate>
-      {section('path', fieldsOfSection('path').map((field) => input(field.id)))}
+      {section(
+        'path',
+        <>
+          {fieldsOfSection('path').map((field) => input(field.id))}
+          {pathExtras && <div className={styles.wide}>{pathExtras}</div>}
+        </>,
+      )}
 
       {section(
         'transmitter',
