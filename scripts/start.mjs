@@ -84,28 +84,34 @@ async function main() {
 
     await ensureNodeModules();
 
-    step('PostgreSQL 15');
-    const binDir = await ensurePostgresBinaries({ log: (message) => process.stdout.write(`  ${message}\n`) });
-    const resolved = resolveReachableDataDir(path.join(DATA_DIR, 'postgres'));
-    if (resolved.fallback) {
-      process.stdout.write(`  Using ${resolved.dir} for the database: ${resolved.reason}.\n`);
+    const localDatabase = ['127.0.0.1', 'localhost', '::1'].includes(env.DATABASE_HOST);
+    if (!localDatabase) {
+      // DATABASE_HOST names another server: use it as it is, start nothing of our own.
+      step(`PostgreSQL at ${env.DATABASE_HOST}:${databasePort} (DATABASE_HOST is not loopback: no local cluster)`);
+    } else {
+      step('PostgreSQL 15');
+      const binDir = await ensurePostgresBinaries({ log: (message) => process.stdout.write(`  ${message}\n`) });
+      const resolved = resolveReachableDataDir(path.join(DATA_DIR, 'postgres'));
+      if (resolved.fallback) {
+        process.stdout.write(`  Using ${resolved.dir} for the database: ${resolved.reason}.\n`);
+      }
+      const clusterDir = resolved.dir;
+      const wasRunning = await isClusterRunning({ binDir, clusterDir });
+      if (wasRunning) {
+        // Left running by a start that was killed hard: restart it so the current settings apply.
+        process.stdout.write('  The cluster was still running from an earlier start: restarting it.\n');
+        await stopCluster({ binDir, clusterDir, mode: 'fast' });
+      }
+      const { created } = await initCluster({
+        binDir, clusterDir, port: databasePort, fsync: true, log: (message) => process.stdout.write(`  ${message}\n`),
+      });
+      cluster = { binDir, clusterDir }; // from here on, shutdown stops it
+      await startCluster({ binDir, clusterDir, port: databasePort });
+      await ensureRoleAndDatabase({
+        binDir, clusterDir, port: databasePort, user: env.DATABASE_USER, password: env.DATABASE_PASSWORD, database: env.DATABASE_NAME,
+      });
+      process.stdout.write(`  ${created ? 'Created' : 'Started'} the cluster in ${clusterDir}, listening on 127.0.0.1:${databasePort}\n`);
     }
-    const clusterDir = resolved.dir;
-    const wasRunning = await isClusterRunning({ binDir, clusterDir });
-    if (wasRunning) {
-      // Left running by a start that was killed hard: restart it so the current settings apply.
-      process.stdout.write('  The cluster was still running from an earlier start: restarting it.\n');
-      await stopCluster({ binDir, clusterDir, mode: 'fast' });
-    }
-    const { created } = await initCluster({
-      binDir, clusterDir, port: databasePort, fsync: true, log: (message) => process.stdout.write(`  ${message}\n`),
-    });
-    cluster = { binDir, clusterDir }; // from here on, shutdown stops it
-    await startCluster({ binDir, clusterDir, port: databasePort });
-    await ensureRoleAndDatabase({
-      binDir, clusterDir, port: databasePort, user: env.DATABASE_USER, password: env.DATABASE_PASSWORD, database: env.DATABASE_NAME,
-    });
-    process.stdout.write(`  ${created ? 'Created' : 'Started'} the cluster in ${clusterDir}, listening on 127.0.0.1:${databasePort}\n`);
 
     step('Builds');
     await buildWorkspaces({ env: { ...env, NODE_ENV: 'production' } });
