@@ -5,7 +5,7 @@
  *
  * The standards are copyrighted: the limits below are recalled from IEC 60825-1 (Ed. 2, 2007 and
  * Ed. 3, 2014, Annex A Table A.1 and the Class 1 AEL table) and ANSI Z136.1 Table 5a, cross-checked
- * against secondary transcriptions [from memory]. Results are indicative, never a certification.
+ * against secondary reproductions [from memory]. Results are indicative, never a certification.
  */
 import { requirePositive } from '../atmosphere/input-guards.js';
 
@@ -140,7 +140,7 @@ export interface OcularMpeDetails {
  * @param input wavelength [m], exposure [s] > 0, optional edition
  * @returns the MPE parts (see {@link OcularMpeDetails})
  * @see IEC 60825-1:2007 and :2014, Annex A Table A.1; ANSI Z136.1-2014 Table 5a; ICNIRP, Health
- *   Physics 105(3), 271–295 (2013) [from memory, cross-checked against secondary transcriptions].
+ *   Physics 105(3), 271–295 (2013) [from memory, cross-checked against secondary reproductions].
  */
 export function ocularMpeDetails(input: OcularMpeInput): OcularMpeDetails {
   const nm = wavelengthNm(input.wavelengthM);
