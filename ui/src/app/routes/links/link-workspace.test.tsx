@@ -126,7 +126,7 @@ describe('link workspace (engineer)', () => {
 
     // the note typed before the conflict is still there
     await userEvent.click(screen.getByRole('button', { name: 'Save as revision 4' }));
-    expect(within(await findDialog()).getByRole('textbox')).toHaveValue('Surveyed path');
+    expect(within(await findDialog()).getByRole('textbox', { hidden: true })).toHaveValue('Surveyed path');
   });
 
   it('saves a new revision on top of the one it started from', async () => {
