@@ -122,7 +122,8 @@ describe('link workspace (engineer)', () => {
     expect(powerInput().value).toBe('18 dBm');
     expect(screen.getByTestId('rebase-notice')).toHaveTextContent('Now editing on top of revision 3');
     expect(screen.getByTestId('rebase-notice')).toHaveTextContent('Path length');
-    expect(screen.getByRole('button', { name: 'Save as revision 4' })).toBeEnabled();
+    // the closing alert dialog keeps the page inert until its exit animation ends
+    expect(await screen.findByRole('button', { name: 'Save as revision 4' })).toBeEnabled();
 
     // the note typed before the conflict is still there
     await userEvent.click(screen.getByRole('button', { name: 'Save as revision 4' }));
