@@ -60,24 +60,32 @@ export function waterfallSteps(budget: LinkBudget): { steps: WaterfallStep[]; se
 export function waterfallOption(budget: LinkBudget, mode: ChartMode): ChartOption {
   const { steps, sensitivityDbm } = waterfallSteps(budget);
   const levels = steps.flatMap((step) => [step.low, step.high]).filter(Number.isFinite);
-  const floor = Math.floor((Math.min(...levels, sensitivityDbm) - 5) / 5) * 5;
-  const ceiling = Math.ceil((Math.max(...levels, sensitivityDbm) + 3) / 5) * 5;
+  // Round limits and a round step, so the dBm labels read 20, 0, −20 … despite the offset axis.
+  const floor = Math.floor((Math.min(...levels, sensitivityDbm) - 5) / 10) * 10;
+  const ceiling = Math.ceil((Math.max(...levels, sensitivityDbm) + 3) / 10) * 10;
+  const step = ceiling - floor > 80 ? 20 : 10;
   const colourOf = (kind: WaterfallStep['kind']) =>
     kind === 'level' ? '#0d7586' : kind === 'loss' ? beamPalette.loss : kind === 'margin-good' ? beamPalette.good : beamPalette.poor;
   const text = CHART_TEXT[mode];
   return {
-    grid: { left: 64, right: 16, top: 24, bottom: 40 },
+    grid: { left: 56, right: 84, top: 24, bottom: 56 },
     tooltip: {
       trigger: 'axis',
       axisPointer: { type: 'shadow' },
       formatter: (params: Array<{ dataIndex: number }>) => steps[params[0]?.dataIndex ?? 0]?.detail ?? '',
     },
-    xAxis: { type: 'category', data: steps.map((step) => step.name), ...axisStyle(mode), axisLabel: { color: text.text, interval: 0, fontSize: 11 } },
+    xAxis: {
+      type: 'category',
+      data: steps.map((step) => step.name),
+      ...axisStyle(mode),
+      axisLabel: { color: text.text, interval: 0, fontSize: 11, rotate: 35 },
+    },
     yAxis: {
       type: 'value',
       name: 'dBm',
       min: 0,
       max: ceiling - floor,
+      interval: step,
       ...axisStyle(mode),
       axisLabel: { color: text.text, formatter: (value: number) => round(value + floor, 0) },
     },
@@ -109,12 +117,20 @@ export function waterfallOption(budget: LinkBudget, mode: ChartMode): ChartOptio
           symbol: 'none',
           silent: true,
           lineStyle: { color: text.muted, type: 'dashed' },
-          label: { formatter: `sensitivity ${round(sensitivityDbm, 1)} dBm`, position: 'insideEndTop', color: text.muted },
+          label: { formatter: `sensitivity\n${round(sensitivityDbm, 1)} dBm`, position: 'end', color: text.muted },
           data: [{ yAxis: sensitivityDbm - floor }],
         },
       },
     ],
   };
+}
+
+/** A round axis limit a little above `value` (1, 2 or 5 times a power of ten). */
+function niceLimit(value: number): number {
+  const target = value * 1.1;
+  const power = 10 ** Math.floor(Math.log10(target));
+  const step = [1, 2, 2.5, 5, 10].find((factor) => factor * power >= target) ?? 10;
+  return step * power;
 }
 
 function distanceAxis(maxM: number): { unit: 'km' | 'm'; factor: number } {
@@ -133,7 +149,7 @@ export function beamEnvelopeOption(envelope: BeamEnvelope, mode: ChartMode): Cha
   const markLines: unknown[] = [
     [
       { coord: [rangeM * x.factor, -apertureRadius], lineStyle: { color: beamPalette.aperture, width: 5, type: 'solid' } },
-      { coord: [rangeM * x.factor, apertureRadius], label: { formatter: 'Rx aperture', position: 'end', color: text.text } },
+      { coord: [rangeM * x.factor, apertureRadius], label: { formatter: 'receive\naperture', position: 'end', color: text.text } },
     ],
   ];
   if (envelope.rayleighRangeEndWithinPath) {
@@ -150,7 +166,8 @@ export function beamEnvelopeOption(envelope: BeamEnvelope, mode: ChartMode): Cha
       valueFormatter: (value: number) => `${Math.abs(value).toPrecision(3)} ${y.unit}`,
     },
     xAxis: { type: 'value', name: `distance from the transmitter (${x.unit})`, nameLocation: 'middle', nameGap: 28, max: rangeM * x.factor, ...axisStyle(mode) },
-    yAxis: { type: 'value', name: `1/e² radius (${y.unit})`, ...axisStyle(mode) },
+    // symmetric, and tall enough for the receive aperture even when the beam is smaller
+    yAxis: { type: 'value', name: `1/e² radius (${y.unit})`, min: -niceLimit(largest * y.factor), max: niceLimit(largest * y.factor), ...axisStyle(mode) },
     series: [
       {
         name: 'Beam radius',

@@ -86,7 +86,7 @@ export function DesignCharts({ design, budget, requiredMarginDb }: DesignChartsP
   if (!series || !options) return null;
   const { envelope } = series;
   const rayleighText = envelope.rayleighRangeEndWithinPath
-    ? `The dashed line marks where the Rayleigh range ends (${formatDistance(envelope.rayleighRangeEndM)} from the transmitter); beyond it the beam grows linearly.`
+    ? `The dashed line marks where the Rayleigh range ends (${formatDistance(envelope.rayleighRangeEndM)} from the transmitter); beyond it the beam widens almost linearly with distance.`
     : envelope.rayleighRangeEndM > 0
       ? `Rayleigh range ${formatDistance(envelope.rayleighRangeM)}: it ends beyond the receiver, so the beam stays near its waist over the whole path.`
       : `The beam is launched diverging (virtual waist ${formatDistance(-envelope.waistPositionM)} behind the aperture, Rayleigh range ${formatDistance(envelope.rayleighRangeM)}), so it widens from the start.`;
