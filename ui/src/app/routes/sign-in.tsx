@@ -31,16 +31,32 @@ const useStyles = makeStyles({
   demo: { color: tokens.colorNeutralForeground3 },
 });
 
-// A beam leaving one rooftop terminal, passing its waist and widening toward the other.
+// A beam leaving one rooftop terminal, narrow at its waist, widening toward the other roof.
 function BeamIllustration({ className }: { className: string }) {
+  const windows = (x: number, y: number, columns: number, rows: number) =>
+    Array.from({ length: columns * rows }, (_, index) => (
+      <rect key={index} x={x + (index % columns) * 12} y={y + Math.floor(index / columns) * 14} width="5" height="7" fill="#3ca3b5" opacity={(index * 7) % 5 === 0 ? 0.55 : 0.18} />
+    ));
   return (
-    <svg className={className} viewBox="0 0 560 160" role="img" aria-label="A laser beam between two rooftop terminals">
-      <rect x="8" y="88" width="60" height="72" fill="#0a2f38" />
-      <rect x="492" y="70" width="60" height="90" fill="#0a2f38" />
-      <rect x="30" y="70" width="16" height="18" rx="3" fill="#58b2c2" />
-      <rect x="514" y="52" width="16" height="18" rx="3" fill="#58b2c2" />
-      <path d="M46 73 Q180 76 514 50 L514 72 Q180 84 46 85 Z" fill="#e8a33d" opacity="0.28" />
-      <path d="M46 79 L514 61" stroke="#f2b84b" strokeWidth="2" strokeDasharray="6 6" />
+    <svg className={className} viewBox="0 0 560 190" role="img" aria-label="A laser beam crossing between two rooftop terminals">
+      <defs>
+        <linearGradient id="beam-fill" x1="0" x2="1" y1="0" y2="0">
+          <stop offset="0" stopColor="#f2b84b" stopOpacity="0.75" />
+          <stop offset="1" stopColor="#f2b84b" stopOpacity="0.2" />
+        </linearGradient>
+      </defs>
+      <rect x="150" y="120" width="70" height="70" fill="#0b3540" />
+      <rect x="236" y="104" width="48" height="86" fill="#0a313b" />
+      <rect x="300" y="132" width="90" height="58" fill="#0b3540" />
+      <rect x="402" y="112" width="44" height="78" fill="#0a313b" />
+      <rect x="14" y="92" width="96" height="98" fill="#072a32" />
+      {windows(24, 104, 7, 6)}
+      <rect x="452" y="70" width="96" height="120" fill="#072a32" />
+      {windows(462, 84, 7, 7)}
+      <rect x="58" y="78" width="22" height="14" rx="3" fill="#58b2c2" />
+      <rect x="484" y="56" width="22" height="14" rx="3" fill="#58b2c2" />
+      <path d="M80 82 C 200 81, 360 70, 484 52 L484 76 C 360 82, 200 86, 80 88 Z" fill="url(#beam-fill)" />
+      <path d="M80 85 C 200 84, 360 76, 484 64" fill="none" stroke="#f2b84b" strokeWidth="1.5" strokeDasharray="5 6" />
     </svg>
   );
 }
