@@ -12,6 +12,8 @@ import { DesignEditor } from '@/app/routes/links/design-editor';
 import type { LinkDetail } from '@/features/links/api/types';
 import { useWorkspaceStyles } from '@/app/routes/links/workspace-layout';
 import { SitePathSummary } from '@/features/sites/components/site-path-summary';
+import { ReviewActions } from '@/features/reviews/components/review-actions';
+import type { Role } from '@beamwright/link-core/contracts';
 
 function HistoryButton({ linkId }: { linkId: string }) {
   return (
@@ -22,11 +24,19 @@ function HistoryButton({ linkId }: { linkId: string }) {
 }
 
 /** Installers and reviewers read the stored design: no inputs, no save. */
-function DesignViewer({ link }: { link: LinkDetail }) {
+function DesignViewer({ link, role }: { link: LinkDetail; role: Role | undefined }) {
   const styles = useWorkspaceStyles();
   return (
     <>
-      <LinkHeader link={link} actions={<HistoryButton linkId={link.id} />} />
+      <LinkHeader
+        link={link}
+        actions={
+          <>
+            <HistoryButton linkId={link.id} />
+            <ReviewActions linkId={link.id} revision={link.revision} status={link.status} role={role} />
+          </>
+        }
+      />
       <div className={styles.layout}>
         <div style={{ display: 'grid', rowGap: 12 }}>
           <SitePathSummary siteAId={link.siteA?.id} siteBId={link.siteB?.id} designRangeM={link.design.rangeM} />
@@ -54,7 +64,7 @@ export function LinkWorkspaceRoute() {
     );
   }
   if (link.isError) return <ErrorView error={link.error} />;
-  if (!policies.canEditDesigns(role)) return <DesignViewer link={link.data} />;
+  if (!policies.canEditDesigns(role)) return <DesignViewer link={link.data} role={role} />;
   return <DesignEditor key={link.data.id} link={link.data} historyAction={<HistoryButton linkId={link.data.id} />} />;
 }
 
