@@ -34,6 +34,10 @@ describe('chart options', () => {
       series: { markLine: { data: Record<string, unknown>[] } }[];
     };
     const marks = option.series[0]!.markLine.data;
+    // the shaded failing band runs from the bottom of the axis up to 0 dB, never above it
+    const typed = option as unknown as { yAxis: { min: number }; series: { markArea: { data: [{ yAxis: number }, { yAxis: number }][] } }[] };
+    expect(typed.series[0]!.markArea.data[0]).toEqual([{ yAxis: typed.yAxis.min }, { yAxis: 0 }]);
+    expect(typed.yAxis.min).toBeLessThan(0);
     expect(marks).toEqual(expect.arrayContaining([expect.objectContaining({ yAxis: 0 }), expect.objectContaining({ yAxis: 3 }), expect.objectContaining({ xAxis: 2 })]));
   });
 });

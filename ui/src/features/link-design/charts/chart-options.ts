@@ -195,6 +195,9 @@ export function marginVsRangeOption(sweep: RangeSweep, designRangeM: number, req
   const last = sweep.rangeM[sweep.rangeM.length - 1] ?? designRangeM;
   const x = distanceAxis(last);
   const text = CHART_TEXT[mode];
+  // The axis always shows the failing region below 0 dB, shaded from the bottom of the axis.
+  const lowest = Math.min(...sweep.linkMarginDb);
+  const axisMin = Math.min(-5, Math.floor(lowest / 5) * 5);
   return {
     grid: { left: 56, right: 24, top: 24, bottom: 44 },
     tooltip: {
@@ -205,7 +208,7 @@ export function marginVsRangeOption(sweep: RangeSweep, designRangeM: number, req
       },
     },
     xAxis: { type: 'value', name: `path length (${x.unit})`, nameLocation: 'middle', nameGap: 28, min: 0, max: last * x.factor, ...axisStyle(mode) },
-    yAxis: { type: 'value', name: 'margin (dB)', ...axisStyle(mode) },
+    yAxis: { type: 'value', name: 'margin (dB)', min: axisMin, ...axisStyle(mode) },
     series: [
       {
         name: 'Link margin',
@@ -226,7 +229,7 @@ export function marginVsRangeOption(sweep: RangeSweep, designRangeM: number, req
             { xAxis: designRangeM * x.factor, lineStyle: { color: beamPalette.beam, type: 'solid', width: 2 }, label: { formatter: 'this design', color: text.text } },
           ],
         },
-        markArea: { silent: true, itemStyle: { color: beamPalette.poor, opacity: 0.06 }, data: [[{ yAxis: 'min' }, { yAxis: 0 }]] },
+        markArea: { silent: true, itemStyle: { color: beamPalette.poor, opacity: 0.08 }, data: [[{ yAxis: axisMin }, { yAxis: 0 }]] },
       },
     ],
   };
