@@ -62,15 +62,18 @@ describe('api client on 401', () => {
     expect(getSessionToken()).toBeNull();
   });
 
-  it('signing out clears the session and shows the sign-in page', async () => {
+  it('signing out clears the session and the unsaved drafts, and shows the sign-in page', async () => {
     setSessionToken('token-abc', 3600);
     mockApi([
       { path: '/auth/me', body: demoEngineer },
       { path: '/links', body: { items: [], total: 0, page: 1, pageSize: 20 } },
     ]);
+    window.sessionStorage.setItem('beamwright.draft.some-link', '{}');
     renderApp('/links');
     await userEvent.click(await screen.findByRole('button', { name: 'Sign out' }));
     await waitFor(() => expect(getSessionToken()).toBeNull());
+    // unsaved drafts of this user do not stay in the tab for the next one
+    expect(window.sessionStorage.getItem('beamwright.draft.some-link')).toBeNull();
     expect(await screen.findByRole('heading', { name: 'Sign in' })).toBeInTheDocument();
   });
 });

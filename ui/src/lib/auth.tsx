@@ -55,8 +55,11 @@ export function useSignOut() {
   const queryClient = useQueryClient();
   return () => {
     clearSessionToken();
-    // Nothing fetched for one user may be shown to the next.
+    // Nothing fetched or typed by one user may be shown to the next in this tab.
     queryClient.clear();
+    for (const key of Object.keys(window.sessionStorage)) {
+      if (key.startsWith('beamwright.draft.')) window.sessionStorage.removeItem(key);
+    }
   };
 }
 
