@@ -45,6 +45,8 @@ export function NewLinkRoute() {
   const [siteAId, setSiteAId] = useState('');
   const [siteBId, setSiteBId] = useState('');
   const [errors, setErrors] = useState<Errors>({});
+  // Choosing either site changes the path, so the site and path errors no longer apply.
+  const clearSiteErrors = () => setErrors((current) => ({ ...current, siteAId: undefined, siteBId: undefined, rangeM: undefined }));
 
   // With both ends chosen, the path length follows from their coordinates and heights.
   const geometry = useMemo(() => {
@@ -127,38 +129,26 @@ export function NewLinkRoute() {
           />
         </Field>
         <div className={styles.row}>
-          <Field label="Site A" validationMessage={errors.siteAId} validationState={errors.siteAId ? 'error' : 'none'} hint="Optional">
-            <Select
-              value={siteAId}
-              onChange={(_, data) => {
-                setSiteAId(data.value);
-                setErrors((current) => ({ ...current, siteAId: undefined, siteBId: undefined, rangeM: undefined }));
-              }}
-            >
-              <option value="">No site yet</option>
-              {sites.data?.map((site) => (
-                <option key={site.id} value={site.id}>
-                  {site.name}
-                </option>
-              ))}
-            </Select>
-          </Field>
-          <Field label="Site B" validationMessage={errors.siteBId} validationState={errors.siteBId ? 'error' : 'none'} hint="Optional">
-            <Select
-              value={siteBId}
-              onChange={(_, data) => {
-                setSiteBId(data.value);
-                setErrors((current) => ({ ...current, siteAId: undefined, siteBId: undefined, rangeM: undefined }));
-              }}
-            >
-              <option value="">No site yet</option>
-              {sites.data?.map((site) => (
-                <option key={site.id} value={site.id}>
-                  {site.name}
-                </option>
-              ))}
-            </Select>
-          </Field>
+          <SiteSelectField
+            label="Site A"
+            sites={sites.data}
+            value={siteAId}
+            error={errors.siteAId}
+            onChange={(value) => {
+              setSiteAId(value);
+              clearSiteErrors();
+            }}
+          />
+          <SiteSelectField
+            label="Site B"
+            sites={sites.data}
+            value={siteBId}
+            error={errors.siteBId}
+            onChange={(value) => {
+              setSiteBId(value);
+              clearSiteErrors();
+            }}
+          />
         </div>
         <Field
           label="Path length"
@@ -188,3 +178,26 @@ export function NewLinkRoute() {
 }
 
 export const Component = NewLinkRoute;
+
+interface SiteSelectFieldProps {
+  label: string;
+  sites: ReadonlyArray<{ id: string; name: string }> | undefined;
+  value: string;
+  error: string | undefined;
+  onChange: (siteId: string) => void;
+}
+
+function SiteSelectField({ label, sites, value, error, onChange }: SiteSelectFieldProps) {
+  return (
+    <Field label={label} validationMessage={error} validationState={error ? 'error' : 'none'} hint="Optional">
+      <Select value={value} onChange={(_, data) => onChange(data.value)}>
+        <option value="">No site yet</option>
+        {sites?.map((site) => (
+          <option key={site.id} value={site.id}>
+            {site.name}
+          </option>
+        ))}
+      </Select>
+    </Field>
+  );
+}
