@@ -117,24 +117,8 @@ export function LinkHistoryRoute() {
             ) : (
               <>
                 <div className={styles.pickers}>
-                  <Field label="From revision">
-                    <Select value={String(from ?? '')} onChange={(_, data) => setFrom(Number(data.value))} aria-label="Compare from revision">
-                      {numbers.map((number) => (
-                        <option key={number} value={number}>
-                          {number}
-                        </option>
-                      ))}
-                    </Select>
-                  </Field>
-                  <Field label="To revision">
-                    <Select value={String(to ?? '')} onChange={(_, data) => setTo(Number(data.value))} aria-label="Compare to revision">
-                      {numbers.map((number) => (
-                        <option key={number} value={number}>
-                          {number}
-                        </option>
-                      ))}
-                    </Select>
-                  </Field>
+                  <RevisionSelectField label="From revision" ariaLabel="Compare from revision" numbers={numbers} value={from} onChange={setFrom} />
+                  <RevisionSelectField label="To revision" ariaLabel="Compare to revision" numbers={numbers} value={to} onChange={setTo} />
                 </div>
                 {from === to && <Caption1 className={styles.muted}>Pick two different revisions.</Caption1>}
                 {diff.isFetching && <Spinner size="tiny" label="Comparing…" />}
@@ -177,3 +161,25 @@ export function LinkHistoryRoute() {
 }
 
 export const Component = LinkHistoryRoute;
+
+interface RevisionSelectFieldProps {
+  label: string;
+  ariaLabel: string;
+  numbers: readonly number[];
+  value: number | null | undefined;
+  onChange: (revision: number) => void;
+}
+
+function RevisionSelectField({ label, ariaLabel, numbers, value, onChange }: RevisionSelectFieldProps) {
+  return (
+    <Field label={label}>
+      <Select value={String(value ?? '')} onChange={(_, data) => onChange(Number(data.value))} aria-label={ariaLabel}>
+        {numbers.map((number) => (
+          <option key={number} value={number}>
+            {number}
+          </option>
+        ))}
+      </Select>
+    </Field>
+  );
+}
