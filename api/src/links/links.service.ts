@@ -13,11 +13,11 @@ import type {
   RevisionListResponse,
   UpdateLinkRequestSchema,
 } from '@beamwright/link-core/contracts';
+import { diffDesigns } from '@beamwright/link-core/contracts';
 import type { z } from 'zod';
 import type { AuthUser } from '../common/auth-user.js';
 import { postgresErrorCode, UNIQUE_VIOLATION } from '../common/database-errors.js';
 import { SitesService } from '../sites/sites.service.js';
-import { diffDesigns } from './design-diff.js';
 import { computeBudget } from './link-budget.js';
 import { approvalFrom, toLinkDetail, toLinkSummary, toRevision, toRevisionSummary } from './link.mapper.js';
 import { LinkReview } from './link-review.entity.js';

@@ -11,3 +11,4 @@ export * from './sites.contract.js';
 export * from './equipment.contract.js';
 export * from './links.contract.js';
 export * from './reviews.contract.js';
+export * from './design-diff.js';

@@ -1,5 +1,6 @@
 // Field-by-field comparison of two stored designs, in words and units an engineer reads.
 import type { LinkDesignInput } from '@beamwright/link-core';
+import { diffDesigns as diffDesignLeaves } from '@beamwright/link-core/contracts';
 import {
   ATMOSPHERE_MODEL_LABELS,
   CHOICE_FIELD_LABELS,
@@ -14,17 +15,6 @@ export interface DesignChange {
   label: string;
   before: string;
   after: string;
-}
-
-function flatten(value: unknown, prefix = '', into: Record<string, unknown> = {}): Record<string, unknown> {
-  if (value !== null && typeof value === 'object' && !Array.isArray(value)) {
-    for (const [key, child] of Object.entries(value as Record<string, unknown>)) {
-      flatten(child, prefix ? `${prefix}.${key}` : key, into);
-    }
-  } else if (prefix) {
-    into[prefix] = value;
-  }
-  return into;
 }
 
 /** A stored value written for people: units for quantities, names for choices. */
@@ -61,24 +51,16 @@ export function designFieldLabel(path: string): string {
   return field?.label ?? CHOICE_FIELD_LABELS[path] ?? path;
 }
 
-/** Every leaf that differs between `before` and `after`, in the order of the form. */
+/** Every leaf that differs between `before` and `after` (link-core's shared diff), in the order of the form. */
 export function diffDesigns(before: LinkDesignInput | null | undefined, after: LinkDesignInput | null | undefined): DesignChange[] {
-  const left = flatten(before ?? {});
-  const right = flatten(after ?? {});
   const order = Object.keys(QUANTITY_FIELDS);
-  const paths = [...new Set([...Object.keys(left), ...Object.keys(right)])].sort((a, b) => {
-    const ia = order.indexOf(a);
-    const ib = order.indexOf(b);
-    return (ia === -1 ? 999 : ia) - (ib === -1 ? 999 : ib) || a.localeCompare(b);
-  });
-  return paths
-    .filter((path) => left[path] !== right[path])
-    .map((path) => ({
-      path,
-      label: designFieldLabel(path),
-      before: describeDesignValue(path, left[path]),
-      after: describeDesignValue(path, right[path]),
-    }));
+  const rank = (path: string) => {
+    const index = order.indexOf(path);
+    return index === -1 ? order.length : index;
+  };
+  return diffDesignLeaves(before, after)
+    .sort((a, b) => rank(a.path) - rank(b.path) || a.path.localeCompare(b.path))
+    .map(describeChange);
 }
 
 /** A change reported by the api (`{ path, from, to }`) in words and units. */

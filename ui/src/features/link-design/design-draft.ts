@@ -1,7 +1,7 @@
 // The form's working copy of a design: the text the engineer typed for every quantity, plus the
 // choices. Turning it into a LinkDesignInput parses each text with link-core's parseQuantity and
 // validates the result with the shared LinkDesignSchema, so every problem lands next to its field.
-import { LinkDesignSchema, convertBeamWidth, formatZodIssues, type LinkDesignInput } from '@beamwright/link-core';
+import { LinkDesignSchema, convertBeamWidth, formatZodIssues, wattsToDbm, type LinkDesignInput } from '@beamwright/link-core';
 import { parseQuantity } from '@beamwright/link-core/units';
 import type { ReceiverSpec, TransmitterSpec } from '@beamwright/link-core/contracts';
 import {
@@ -131,7 +131,7 @@ function parseField(field: QuantityField, text: string): { ok: true; value: numb
   });
   if (!parsed.ok) return { ok: false, reason: parsed.reason };
   // Powers are parsed to watts; the schema holds them in dBm.
-  const value = field.kind === 'power' ? 10 * Math.log10(parsed.valueSi / 1e-3) : parsed.valueSi;
+  const value = field.kind === 'power' ? wattsToDbm(parsed.valueSi) : parsed.valueSi;
   return { ok: true, value };
 }
 

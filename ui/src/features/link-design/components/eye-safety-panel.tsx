@@ -14,7 +14,7 @@ import {
   tokens,
 } from '@fluentui/react-components';
 import { EyeTrackingRegular } from '@fluentui/react-icons';
-import { assessEyeSafety, type EyeSafetyAssessment, type LinkBudget, type LinkDesignInput } from '@beamwright/link-core';
+import { assessEyeSafety, dbmToWatts, type EyeSafetyAssessment, type LinkBudget, type LinkDesignInput } from '@beamwright/link-core';
 import { formatDistance, formatPowerW } from '@/lib/format';
 
 /** Our own short caution for places where only a line fits; the panel shows link-core's full text. */
@@ -38,7 +38,7 @@ const useStyles = makeStyles({
 export function assessDesignEyeSafety(design: LinkDesignInput, budget: LinkBudget | null): { assessment: EyeSafetyAssessment | null; problem: string | null } {
   try {
     const assessment = assessEyeSafety({
-      powerW: 1e-3 * 10 ** (design.transmitter.powerDbm / 10),
+      powerW: dbmToWatts(design.transmitter.powerDbm),
       wavelengthM: design.transmitter.wavelengthM,
       apertureBeamRadiusM: design.transmitter.waistRadiusM,
       // the half angle the beam actually has (never below the diffraction limit)

@@ -17,3 +17,10 @@ describe('diffDesigns', () => {
     expect(diffDesigns({ a: 1, b: { c: true } }, { b: { c: true }, a: 1 })).toEqual([]);
   });
 });
+
+describe('diffDesigns with absent sides', () => {
+  it('treats an undefined field and a missing design like absent fields', () => {
+    expect(diffDesigns({ rangeM: 1000, receiver: { overloadDbm: undefined } }, { rangeM: 1000 })).toEqual([]);
+    expect(diffDesigns(null, { rangeM: 1000 })).toEqual([{ path: 'rangeM', from: null, to: 1000 }]);
+  });
+});
