@@ -1,9 +1,13 @@
+import type { Server } from 'node:http';
 import type { INestApplication } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
 import express, { type NextFunction, type Request, type Response } from 'express';
 import { toErrorBody } from './common/filters/api-exception.filter.js';
+import { applyServerTimeouts, dropStalledBodies, MAX_JSON_BODY_BYTES, refuseOversizedBodies } from './common/http/request-limits.js';
+import { noStoreForApi, securityHeaders } from './common/http/security-headers.js';
+import { assignCspNonce, serveSpaIndex } from './spa/spa-index.js';
 import { isUiBuilt } from './spa/ui-dist.js';
 import type { AppConfig } from './config/app.config.js';
 
@@ -16,10 +20,23 @@ export const API_PREFIX = 'api';
  */
 export function configureApp(app: INestApplication): void {
   const expressApp = app as NestExpressApplication;
+  const config = app.get(ConfigService).get<AppConfig>('app');
+  const requestTimeoutMs = config?.requestTimeoutMs ?? 30_000;
   expressApp.disable('x-powered-by');
+  applyServerTimeouts(expressApp.getHttpServer() as Server, {
+    requestTimeoutMs,
+    headersTimeoutMs: Math.min(20_000, requestTimeoutMs),
+    keepAliveTimeoutMs: 5_000,
+  });
+  expressApp.use(assignCspNonce());
+  expressApp.use(securityHeaders({ hstsMaxAgeSeconds: config?.hstsMaxAgeSeconds ?? 0, docsPath: `/${API_PREFIX}/docs` }));
+  expressApp.use(noStoreForApi(API_PREFIX));
+  if (config) expressApp.use(serveSpaIndex(config.uiDistDir));
+  expressApp.use(refuseOversizedBodies(MAX_JSON_BODY_BYTES));
+  expressApp.use(dropStalledBodies(requestTimeoutMs));
   // Our own JSON parser (the app is created with bodyParser: false) so that a malformed body
   // gets the API's error shape instead of express's HTML page.
-  expressApp.use(express.json({ limit: '1mb' }));
+  expressApp.use(express.json({ limit: MAX_JSON_BODY_BYTES }));
   expressApp.use((error: unknown, _request: Request, response: Response, next: NextFunction) => {
     if (!error) return next();
     const body = toErrorBody(error);
@@ -46,7 +63,6 @@ export function configureApp(app: INestApplication): void {
   );
   SwaggerModule.setup(`${API_PREFIX}/docs`, app, document);
 
-  const config = app.get(ConfigService).get<AppConfig>('app');
   if (config && !isUiBuilt(config.uiDistDir)) {
     (expressApp.getHttpAdapter().getInstance() as express.Express).get('/', (_request: Request, response: Response) => {
       response

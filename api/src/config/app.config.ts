@@ -11,6 +11,8 @@ export const appConfig = registerAs('app', () => {
     host: env.HOST,
     uiDistDir: env.UI_DIST_DIR ? resolve(env.UI_DIST_DIR) : resolve(CHECKOUT_ROOT, 'ui', 'dist'),
     demoPassword: env.DEMO_PASSWORD,
+    hstsMaxAgeSeconds: env.HSTS_MAX_AGE_SECONDS,
+    requestTimeoutMs: env.HTTP_REQUEST_TIMEOUT_SECONDS * 1000,
   };
 });
 export type AppConfig = ReturnType<typeof appConfig>;

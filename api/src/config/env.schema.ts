@@ -23,6 +23,10 @@ export const EnvSchema = z.object({
     .regex(/^\d+[smhd]?$/, 'must be seconds or a number followed by s, m, h or d (e.g. 8h)')
     .default('8h'),
   DEMO_PASSWORD: z.string().min(8, 'must be at least 8 characters').default('demo-pass-2026'),
+  /** Strict-Transport-Security max-age in seconds; 0 (the default) sends none: set it only behind TLS */
+  HSTS_MAX_AGE_SECONDS: z.coerce.number().int().min(0).max(63_072_000).default(0),
+  /** a request whose headers and body have not all arrived within this many seconds is dropped */
+  HTTP_REQUEST_TIMEOUT_SECONDS: z.coerce.number().min(1).max(600).default(30),
   /** folder of the built UI; defaults to <checkout>/ui/dist */
   UI_DIST_DIR: z.string().min(1).optional(),
 });

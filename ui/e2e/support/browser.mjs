@@ -29,9 +29,19 @@ export async function openBrowser({ width = 1440, height = 900 } = {}) {
     ],
   });
   context.setDefaultTimeout(15_000);
+  // The app runs under a strict Content-Security-Policy: a refused script, style, font or image
+  // is reported by the browser as a securitypolicyviolation event, and counts as a page error.
+  await context.addInitScript(() => {
+    document.addEventListener('securitypolicyviolation', (event) => {
+      console.error(`CSP violation: ${event.violatedDirective} blocked ${event.blockedURI || 'inline content'} in ${event.sourceFile || 'the page'}`);
+    });
+  });
   const page = context.pages()[0] ?? (await context.newPage());
   const consoleErrors = [];
   page.on('pageerror', (error) => consoleErrors.push(String(error)));
+  page.on('console', (message) => {
+    if (message.type() === 'error' && /Content Security Policy|CSP violation/.test(message.text())) consoleErrors.push(message.text());
+  });
   return {
     context,
     page,
