@@ -11,10 +11,11 @@ import {
   ensurePostgresBinaries, ensureRoleAndDatabase, initCluster, isClusterRunning, isPortInUse,
   resolveReachableDataDir, startCluster, stopCluster,
 } from './lib/postgres.mjs';
-import {
-  DATA_DIR, DEFAULT_ENV, DEMO_USERS, ROOT_DIR, buildWorkspaces, ensureNodeModules, killRunningChildren,
-  loadDotEnv, localJwtSecret, runCommand, step, waitForHealth,
-} from './lib/project.mjs';
+import { buildWorkspaces } from './lib/builds.mjs';
+import { ensureNodeModules } from './lib/dependencies.mjs';
+import { DEFAULT_ENV, DEMO_USERS, loadDotEnv, localJwtSecret } from './lib/environment.mjs';
+import { DATA_DIR, ROOT_DIR } from './lib/paths.mjs';
+import { killRunningChildren, runCommand, step, waitForHealth } from './lib/processes.mjs';
 import { acquireLock, releaseLock as releaseLockFile } from './lib/single-instance.mjs';
 
 const LOCK_FILE = path.join(DATA_DIR, 'start.lock');

@@ -4,7 +4,7 @@ import { describe, it } from 'node:test';
 import assert from 'node:assert/strict';
 import path from 'node:path';
 import { ESLint } from 'eslint';
-import { ROOT_DIR } from './project.mjs';
+import { ROOT_DIR } from './paths.mjs';
 
 const eslint = new ESLint({ cwd: ROOT_DIR });
 
