@@ -3,7 +3,8 @@
  * declares (read from the zod schemas, so a changed bound moves the generator with it), with the
  * bounds themselves, values a hair inside them and probabilities at their limits drawn often.
  * Every accepted design must give a budget whose every number is finite, and no single call may
- * take long: the slowest call of the run is asserted against a generous bound and printed.
+ * take long: the slowest call of the run (CPU time, after a warm-up) is asserted against a
+ * generous bound and printed.
  *
  * The bound is a guard against pathological inputs (a stalled root search took about 10 s per call
  * at p = 1e-17), not a performance target: those are in `npm run bench`.
@@ -99,6 +100,11 @@ function numbersOf(value: unknown, path = ''): [string, number][] {
 
 describe('evaluateLink over the whole schema domain', () => {
   it(`gives only finite numbers, and no call takes more than ${SLOWEST_CALL_BOUND_MS} ms`, () => {
+    // Warm-up, so that the first calls' compilation is not counted as the cost of a design.
+    for (const input of fc.sample(designArbitrary, { numRuns: 300, seed: 1 })) {
+      const parsed = LinkDesignSchema.safeParse(input);
+      if (parsed.success) evaluateLink(parsed.data);
+    }
     let slowestMs = 0;
     let slowestDesign: unknown;
     let evaluated = 0;
@@ -108,9 +114,11 @@ describe('evaluateLink over the whole schema domain', () => {
         // the only cross-field rule: the overload level must exceed the sensitivity
         fc.pre(parsed.success);
         const design = parsed.data!;
-        const start = performance.now();
+        // CPU time of this process: on a shared machine wall time would also count the neighbours.
+        const start = process.cpuUsage();
         const budget: LinkBudget = evaluateLink(design);
-        const elapsedMs = performance.now() - start;
+        const used = process.cpuUsage(start);
+        const elapsedMs = (used.user + used.system) / 1000;
         evaluated++;
         if (elapsedMs > slowestMs) {
           slowestMs = elapsedMs;
@@ -122,7 +130,17 @@ describe('evaluateLink over the whole schema domain', () => {
       }),
       { numRuns: RUNS, seed: 20261203 },
     );
-    console.log(`slowest evaluateLink call over ${evaluated} designs across the schema domain: ${slowestMs.toFixed(2)} ms (bound ${SLOWEST_CALL_BOUND_MS} ms)`);
+    // The slowest call mixes the design's own cost with collector pauses: re-time that design alone.
+    let retimedMs = Infinity;
+    for (let i = 0; i < 5; i++) {
+      const start = process.cpuUsage();
+      evaluateLink(slowestDesign as LinkDesignInput);
+      const used = process.cpuUsage(start);
+      retimedMs = Math.min(retimedMs, (used.user + used.system) / 1000);
+    }
+    console.log(
+      `slowest evaluateLink call over ${evaluated} designs across the schema domain: ${slowestMs.toFixed(2)} ms CPU (bound ${SLOWEST_CALL_BOUND_MS} ms); that design re-timed alone: ${retimedMs.toFixed(2)} ms`,
+    );
     expect(evaluated).toBeGreaterThan(RUNS * 0.8);
     expect(slowestMs, `slowest design: ${JSON.stringify(slowestDesign)}`).toBeLessThan(SLOWEST_CALL_BOUND_MS);
   });
