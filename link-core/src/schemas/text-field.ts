@@ -24,10 +24,23 @@ export interface TextFieldOptions {
   multiline?: boolean;
 }
 
-// C0, DEL and C1; the multiline variant leaves out tab (U+0009) and LF (U+000A). CR never
-// survives in a multiline field: it is turned into LF first.
-const SINGLE_LINE_FORBIDDEN = /[\u0000-\u001f\u007f-\u009f]/u;
-const MULTILINE_FORBIDDEN = /[\u0000-\u0008\u000b-\u001f\u007f-\u009f]/u;
+/**
+ * Index of the first control character (C0, DEL or C1), or −1. A multiline field allows tab
+ * (U+0009) and LF (U+000A); CR never reaches this check there, it is turned into LF first.
+ * A loop over code units rather than a regular expression of control characters (which the lint
+ * rules rightly flag as usually a mistake).
+ */
+function firstControlCharacter(value: string, multiline: boolean): number {
+  for (let i = 0; i < value.length; i++) {
+    const unit = value.charCodeAt(i);
+    if (unit <= 0x1f) {
+      if (multiline && (unit === 0x09 || unit === 0x0a)) continue;
+      return i;
+    }
+    if (unit >= 0x7f && unit <= 0x9f) return i;
+  }
+  return -1;
+}
 
 function codePointLength(value: string): number {
   let count = 0;
@@ -58,7 +71,6 @@ function describeControlCharacter(value: string, index: number): string {
  *   Cc (the C0 and C1 control characters and DEL).
  */
 export function textField({ min = 0, max, multiline = false }: TextFieldOptions) {
-  const forbidden = multiline ? MULTILINE_FORBIDDEN : SINGLE_LINE_FORBIDDEN;
   const controlMessage = multiline ? 'must not contain control characters other than tab and line breaks' : 'must not contain control characters';
   let schema = z.string({ error: (issue) => (issue.input === undefined ? 'is required' : 'must be text') });
   if (multiline) schema = schema.overwrite((value) => value.replace(/\r\n?/g, '\n'));
@@ -66,9 +78,9 @@ export function textField({ min = 0, max, multiline = false }: TextFieldOptions)
     .normalize('NFC')
     .trim()
     .superRefine((value, context) => {
-      const match = forbidden.exec(value);
-      if (match) {
-        context.addIssue({ code: 'custom', message: `${controlMessage} (${describeControlCharacter(value, match.index)})`, input: value, abort: true });
+      const index = firstControlCharacter(value, multiline);
+      if (index >= 0) {
+        context.addIssue({ code: 'custom', message: `${controlMessage} (${describeControlCharacter(value, index)})`, input: value, abort: true });
         return;
       }
       const length = codePointLength(value);
