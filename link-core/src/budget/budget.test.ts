@@ -32,6 +32,17 @@ describe('evaluateLink', () => {
     expect(budget.receivedPowerDbm).toBeCloseTo(-13.8523, 4);
   });
 
+  it('refuses a design with a required field missing instead of answering NaN, naming the field', () => {
+    const { rangeM: _rangeM, ...withoutRange } = lb01;
+    expect(() => evaluateLink(withoutRange as LinkDesignInput)).toThrow(/rangeM: is required/);
+    const withoutPower = variant((design) => delete (design.transmitter as Partial<typeof design.transmitter>).powerDbm);
+    expect(() => evaluateLink(withoutPower)).toThrow(/transmitter\.powerDbm: is required/);
+    const withoutCn2 = variant((design) => delete (design.atmosphere as Partial<typeof design.atmosphere>).cn2);
+    expect(() => evaluateLink(withoutCn2)).toThrow(/atmosphere\.cn2: is required/);
+    const stringRange = variant((design) => ((design as unknown as Record<string, unknown>).rangeM = '2000'));
+    expect(() => evaluateLink(stringRange)).toThrow(RangeError);
+  });
+
   it('returns a budget that satisfies its own schema', () => {
     expect(LinkBudgetSchema.safeParse(budget).success).toBe(true);
   });

@@ -4,7 +4,8 @@
  */
 import { coherenceRadiusM } from '../turbulence/rytov.js';
 import type { BudgetCheck, BudgetTerm, BudgetTermKey, LinkBudget } from '../schemas/link-budget.schema.js';
-import type { LinkDesignInput } from '../schemas/link-design.schema.js';
+import { formatZodIssues } from '../schemas/format-zod-issues.js';
+import { LinkDesignSchema, type LinkDesignInput } from '../schemas/link-design.schema.js';
 import { FOG_ATTENUATION_DESCRIPTION, POINTING_OUTAGE_DESCRIPTION, TERM_DESCRIPTIONS, type TermDescription } from './budget-terms.js';
 import { emptyResolvedDesign, evaluateChain, resolveDesign, resolveDesignInto, specificAttenuationDbPerKm, type ResolvedDesign } from './link-chain.js';
 
@@ -94,12 +95,50 @@ function collectChecks(design: ResolvedDesign, receivedPowerDbm: number, diffrac
 const scratchDesign = emptyResolvedDesign();
 
 /**
+ * True when every number the chain reads is a number (a missing required field resolves to
+ * undefined). A dozen typeof checks: cheap enough for the hot path, unlike a schema parse.
+ */
+function hasEveryRequiredNumber(design: ResolvedDesign): boolean {
+  return (
+    typeof design.rangeM === 'number' &&
+    typeof design.wavelengthM === 'number' &&
+    typeof design.powerDbm === 'number' &&
+    typeof design.apertureBeamRadiusM === 'number' &&
+    typeof design.halfAngleDivergenceRad === 'number' &&
+    typeof design.m2 === 'number' &&
+    typeof design.transmitOpticsLossDb === 'number' &&
+    typeof design.apertureDiameterM === 'number' &&
+    typeof design.obscurationRatio === 'number' &&
+    typeof design.sensitivityDbm === 'number' &&
+    typeof design.receiveOpticsLossDb === 'number' &&
+    typeof design.jitterSigmaPerAxisRad === 'number' &&
+    typeof design.staticErrorRad === 'number' &&
+    typeof design.visibility2PercentKm === 'number' &&
+    typeof design.cn2 === 'number' &&
+    typeof design.fadeProbability === 'number' &&
+    typeof design.systemMarginDb === 'number'
+  );
+}
+
+/**
+ * The error for a design the engine cannot evaluate: the schema's own issues, so the message names
+ * each field ("rangeM: is required"). Only reached on failure, so the parse costs nothing otherwise.
+ */
+function invalidDesignError(design: unknown): RangeError {
+  const result = LinkDesignSchema.safeParse(design);
+  const issues = result.success ? [] : formatZodIssues(result.error);
+  const detail = issues.length > 0 ? issues.map((issue) => `${issue.path || 'design'}: ${issue.message}`).join('; ') : 'the design is not valid';
+  return new RangeError(`evaluateLink: ${detail}`);
+}
+
+/**
  * Link budget and margin of a design (DOMAIN §8):
  * P_rx = P_tx − L_tx − L_geo − γ·L − L_point − L_rx [dBm]; M = P_rx − S − F_scint − M_system [dB].
  *
  * Accepts a validated design or a raw one with only the required fields: the defaults of
  * LINK_DESIGN_DEFAULTS are applied here with `??`; nothing is parsed, so callers that take user
- * input validate with LinkDesignSchema first. Terms are returned in budget order; each term's
+ * input validate with LinkDesignSchema first. A design with a required number missing (or NaN)
+ * throws a RangeError naming the field instead of answering NaN. Terms are returned in budget order; each term's
  * `valueDb` is its signed contribution, so the terms sum to `linkMarginDb`.
  *
  * @param design the link design (SI units, powers in dBm, losses in dB); see LinkDesignSchema for ranges
@@ -109,8 +148,13 @@ const scratchDesign = emptyResolvedDesign();
  */
 export function evaluateLink(design: LinkDesignInput): LinkBudget {
   const resolved = resolveDesignInto(scratchDesign, design);
+  if (!hasEveryRequiredNumber(resolved)) throw invalidDesignError(design);
   const attenuation = specificAttenuationDbPerKm(resolved, resolved.visibility2PercentKm);
   const chain = evaluateChain(resolved, resolved.rangeM, attenuation, resolved.includeScintillation);
+  // NaN or ±Infinity in an input the typeof check let through (the schema rejects both) shows in
+  // the margin or the beam: name the field rather than answer NaN. A design the schema accepts is
+  // returned as computed (callers that store budgets check them against LinkBudgetSchema).
+  if (!Number.isFinite(chain.linkMarginDb + chain.beamRadiusAtReceiverM) && !LinkDesignSchema.safeParse(design).success) throw invalidDesignError(design);
   const diffractionRad = diffractionHalfAngle(resolved);
   const defocused = resolved.halfAngleDivergenceRad > diffractionRad;
   const outagePointing = !Number.isNaN(resolved.pointingOutageAngleRad);

@@ -68,7 +68,8 @@ function outageAngleRad(jitterSigmaPerAxisRad: number, staticErrorRad: number, o
     // A bias of many σ: R = |ν + x + i·y| ≈ ν + x + y²/(2ν), so r_p ≈ ν + σ·Φ⁻¹(1 − p) + σ²/(2ν)
     // (derived; within 1e-6 of the exact Marcum-Q root at ν/σ = 100 and closer beyond, where the
     // exact root is slow to evaluate).
-    return jitterSigmaPerAxisRad * (offsetOverSigma - normalQuantileOf(outageProbability) + 1 / (2 * offsetOverSigma));
+    // Written as ν − σ·Φ⁻¹(p) + σ²/(2ν) rather than σ·(ν/σ − …): ν/σ overflows for a vanishing jitter.
+    return staticErrorRad - jitterSigmaPerAxisRad * normalQuantileOf(outageProbability) + (jitterSigmaPerAxisRad / staticErrorRad) * (jitterSigmaPerAxisRad / 2);
   }
   return jitterSigmaPerAxisRad * requiredThresholdOverSigma({ outageProbability, staticOffsetOverSigma: offsetOverSigma });
 }

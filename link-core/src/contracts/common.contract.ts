@@ -1,12 +1,8 @@
 /** Small shapes shared by several contracts. */
 import { z } from 'zod';
 
-/** A bounded, trimmed text field with messages that read next to a form field. */
-export function textField({ min = 0, max }: { min?: number; max: number }) {
-  let schema = z.string({ error: (issue) => (issue.input === undefined ? 'is required' : 'must be text') }).trim();
-  if (min > 0) schema = schema.min(min, min === 1 ? 'is required' : `must be at least ${min} characters`);
-  return schema.max(max, `must be at most ${max} characters`);
-}
+/** The one text-field schema (control characters refused, NFC, trimmed, length in characters). */
+export { textField, type TextFieldOptions } from '../schemas/text-field.js';
 
 /** A number in a range; the message names the bound (units are part of the field name). */
 export function numberField({ min, max }: { min: number; max: number }) {

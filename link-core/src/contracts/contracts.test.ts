@@ -8,6 +8,10 @@ import {
   LinkListQuerySchema,
   LoginRequestSchema,
   ReturnRevisionRequestSchema,
+  ReviewCommentRequestSchema,
+  UpdateEquipmentRequestSchema,
+  UpdateLinkRequestSchema,
+  UpdateSiteRequestSchema,
 } from './index.js';
 
 const design = {
@@ -54,5 +58,35 @@ describe('api contracts', () => {
     expect(issues(CreateEquipmentRequestSchema.safeParse(receiver))).toEqual([{ path: 'spec.overloadDbm', message: 'must be greater than the sensitivity' }]);
     const transmitter = { kind: 'transmitter', name: 'Tx', spec: { wavelengthM: 1.55e-6, powerDbm: 20, beamSize: { kind: 'waist-radius', waistRadiusM: 0.025 }, opticsLossDb: 1 } };
     expect(CreateEquipmentRequestSchema.parse(transmitter)).toMatchObject({ maker: '', notes: '', spec: { m2: 1 } });
+  });
+});
+
+describe('text fields of the contracts', () => {
+  const site = { name: 'Roof', latitudeDeg: 0, longitudeDeg: 0, groundElevationM: 0, mountHeightM: 1 };
+  const transmitter = { kind: 'transmitter', name: 'Tx', spec: { wavelengthM: 1.55e-6, powerDbm: 20, beamSize: { kind: 'waist-radius', waistRadiusM: 0.025 }, opticsLossDb: 1 } };
+  const receiver = { kind: 'receiver', name: 'Rx', spec: { apertureDiameterM: 0.1, opticsLossDb: 1, sensitivityDbm: -30, dataRateBps: 1e9 } };
+  // [schema, a valid body, its text fields, which of them are multiline]
+  const table: [string, import('zod').z.ZodType, Record<string, unknown>, string[], string[]][] = [
+    ['create link', CreateLinkRequestSchema, { name: 'Hop', design }, ['name', 'note'], ['note']],
+    ['update link', UpdateLinkRequestSchema, {}, ['name'], []],
+    ['new revision', CreateRevisionRequestSchema, { baseRevision: 1, design }, ['note'], ['note']],
+    ['create site', CreateSiteRequestSchema, site, ['name', 'notes'], ['notes']],
+    ['update site', UpdateSiteRequestSchema, {}, ['name', 'notes'], ['notes']],
+    ['create transmitter', CreateEquipmentRequestSchema, transmitter, ['name', 'maker', 'notes'], ['notes']],
+    ['create receiver', CreateEquipmentRequestSchema, receiver, ['name', 'maker', 'notes'], ['notes']],
+    ['update equipment', UpdateEquipmentRequestSchema, {}, ['name', 'maker', 'notes'], ['notes']],
+    ['review comment', ReviewCommentRequestSchema, {}, ['comment'], ['comment']],
+    ['return comment', ReturnRevisionRequestSchema, { comment: 'x' }, ['comment'], ['comment']],
+    ['link search', LinkListQuerySchema, {}, ['q'], []],
+  ];
+
+  it.each(table)('%s: a NUL is refused naming the field, a line break only where multiline, text comes out NFC', (_name, schema, body, fields, multiline) => {
+    for (const field of fields) {
+      expect(issues(schema.safeParse({ ...body, [field]: 'a\u0000b' }))).toEqual([{ path: field, message: expect.stringMatching(/^must not contain control characters/) }]);
+      const twoLines = schema.safeParse({ ...body, [field]: 'a\nb' });
+      expect(twoLines.success, `${field} with a line break`).toBe(multiline.includes(field));
+      const composed = schema.parse({ ...body, [field]: 'Cafe\u0301' }) as Record<string, unknown>;
+      expect(composed[field]).toBe('Caf\u00e9');
+    }
   });
 });

@@ -90,7 +90,7 @@ const commonFields = {
   name: textField({ min: 1, max: 200 }),
   /** maker or supplier as the organisation knows it */
   maker: textField({ max: 200 }).default(''),
-  notes: textField({ max: 4000 }).default(''),
+  notes: textField({ max: 4000, multiline: true }).default(''),
 };
 
 export const CreateEquipmentRequestSchema = z.discriminatedUnion(
@@ -107,7 +107,7 @@ export type CreateEquipmentRequest = z.input<typeof CreateEquipmentRequestSchema
 export const UpdateEquipmentRequestSchema = z.strictObject({
   name: commonFields.name.optional(),
   maker: textField({ max: 200 }).optional(),
-  notes: textField({ max: 4000 }).optional(),
+  notes: textField({ max: 4000, multiline: true }).optional(),
   spec: z.unknown().optional(),
 });
 export type UpdateEquipmentRequest = z.input<typeof UpdateEquipmentRequestSchema>;

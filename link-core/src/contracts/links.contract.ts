@@ -24,7 +24,7 @@ export const CreateLinkRequestSchema = z.strictObject({
   siteAId: optionalSiteId,
   siteBId: optionalSiteId,
   /** note of revision 1 */
-  note: textField({ max: 2000 }).default(''),
+  note: textField({ max: 2000, multiline: true }).default(''),
 });
 export type CreateLinkRequest = z.input<typeof CreateLinkRequestSchema>;
 
@@ -35,7 +35,7 @@ export const CreateRevisionRequestSchema = z.strictObject({
     .int('must be a whole number')
     .min(1, 'must be at least 1'),
   design: LinkDesignSchema,
-  note: textField({ max: 2000 }).default(''),
+  note: textField({ max: 2000, multiline: true }).default(''),
 });
 export type CreateRevisionRequest = z.input<typeof CreateRevisionRequestSchema>;
 
@@ -58,7 +58,7 @@ export const LinkListQuerySchema = z.strictObject({
   /** links with this site at either end */
   siteId: z.uuid({ error: 'must be a site id (UUID)' }).optional(),
   /** case-insensitive text in the link's name or its sites' names */
-  q: z.string().trim().max(200, 'must be at most 200 characters').optional(),
+  q: textField({ max: 200 }).optional(),
 });
 export type LinkListQuery = z.input<typeof LinkListQuerySchema>;
 

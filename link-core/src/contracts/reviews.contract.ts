@@ -9,11 +9,11 @@ export const ReviewActionSchema = z.enum(REVIEW_ACTIONS);
 export type ReviewAction = z.infer<typeof ReviewActionSchema>;
 
 /** Body of submit, approve and install: an optional comment. */
-export const ReviewCommentRequestSchema = z.strictObject({ comment: textField({ max: 4000 }).default('') });
+export const ReviewCommentRequestSchema = z.strictObject({ comment: textField({ max: 4000, multiline: true }).default('') });
 export type ReviewCommentRequest = z.input<typeof ReviewCommentRequestSchema>;
 
 /** Body of return: the comment is required, it tells the engineer what to change. */
-export const ReturnRevisionRequestSchema = z.strictObject({ comment: textField({ min: 1, max: 4000 }) });
+export const ReturnRevisionRequestSchema = z.strictObject({ comment: textField({ min: 1, max: 4000, multiline: true }) });
 export type ReturnRevisionRequest = z.input<typeof ReturnRevisionRequestSchema>;
 
 export const ReviewEntrySchema = z.object({

@@ -12,7 +12,7 @@ const siteFields = {
   groundElevationM: numberField({ min: -500, max: 9000 }),
   /** height of the terminal mount above the ground elevation [m] */
   mountHeightM: numberField({ min: 0, max: 1000 }),
-  notes: textField({ max: 4000 }).default(''),
+  notes: textField({ max: 4000, multiline: true }).default(''),
 };
 
 export const CreateSiteRequestSchema = z.strictObject(siteFields);
@@ -24,7 +24,7 @@ export const UpdateSiteRequestSchema = z.strictObject({
   longitudeDeg: siteFields.longitudeDeg.optional(),
   groundElevationM: siteFields.groundElevationM.optional(),
   mountHeightM: siteFields.mountHeightM.optional(),
-  notes: textField({ max: 4000 }).optional(),
+  notes: textField({ max: 4000, multiline: true }).optional(),
 });
 export type UpdateSiteRequest = z.input<typeof UpdateSiteRequestSchema>;
 

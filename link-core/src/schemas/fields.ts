@@ -60,10 +60,18 @@ export function boundedNumber(bounds: Bounds) {
   return schema;
 }
 
-/** A probability strictly inside (0, 1), as fade and outage probabilities must be. */
-export function openProbability() {
-  const message = 'probability must be between 0 and 1 (exclusive)';
-  return finiteNumber().gt(0, message).lt(1, message);
+/**
+ * A probability within the range where the model that uses it means something. One message for
+ * both bounds: it states the range and why (e.g. "must be between 1e-9 and 0.5: below 1e-9 …").
+ */
+export function boundedProbability(bounds: { min: number; max: number; reason: string }) {
+  const message = probabilityMessage(bounds);
+  return finiteNumber().gte(bounds.min, message).lte(bounds.max, message);
+}
+
+/** The message of {@link boundedProbability}, for tests and forms that show it before any input. */
+export function probabilityMessage(bounds: { min: number; max: number; reason: string }): string {
+  return `must be between ${String(bounds.min)} and ${String(bounds.max)}: ${bounds.reason}`;
 }
 
 /** A loss in dB: ≥ 0 (a gain is not a loss) and at most `maxDb`. */

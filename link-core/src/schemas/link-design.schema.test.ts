@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { formatZodIssues } from './format-zod-issues.js';
-import { LINK_DESIGN_DEFAULTS, LinkDesignSchema, type LinkDesignInput } from './link-design.schema.js';
+import { FADE_PROBABILITY_MESSAGE, LINK_DESIGN_DEFAULTS, LinkDesignSchema, POINTING_OUTAGE_PROBABILITY_MESSAGE, PROBABILITY_BOUNDS, type LinkDesignInput } from './link-design.schema.js';
 
 // The worked example LB-01 of the reference set (DOMAIN §8): a 2 km 1550 nm link.
 const lb01: LinkDesignInput = {
@@ -66,10 +66,15 @@ describe('LinkDesignSchema', () => {
     ['atmosphere.cn2', -1e-14, 'must be at least 0 m^(−2/3)'],
     ['atmosphere.model', 'fog', 'must be one of kim, kruse, al-naboulsi-advection, al-naboulsi-radiation'],
     ['atmosphere.visibilityDefinition', '5%', 'must be one of contrast-2-percent, mor-5-percent'],
-    ['scintillation.probability', 0, 'probability must be between 0 and 1 (exclusive)'],
-    ['pointing.outageProbability', 1, 'probability must be between 0 and 1 (exclusive)'],
-    ['scintillation.probability', 1, 'probability must be between 0 and 1 (exclusive)'],
-    ['scintillation.probability', 1.5, 'probability must be between 0 and 1 (exclusive)'],
+    ['scintillation.probability', 0, FADE_PROBABILITY_MESSAGE],
+    ['scintillation.probability', 1e-17, FADE_PROBABILITY_MESSAGE],
+    ['scintillation.probability', 9.9e-10, FADE_PROBABILITY_MESSAGE],
+    ['scintillation.probability', 0.51, FADE_PROBABILITY_MESSAGE],
+    ['scintillation.probability', 1, FADE_PROBABILITY_MESSAGE],
+    ['scintillation.probability', 1.5, FADE_PROBABILITY_MESSAGE],
+    ['pointing.outageProbability', 1, POINTING_OUTAGE_PROBABILITY_MESSAGE],
+    ['pointing.outageProbability', 1e-12, POINTING_OUTAGE_PROBABILITY_MESSAGE],
+    ['pointing.outageProbability', 0.75, POINTING_OUTAGE_PROBABILITY_MESSAGE],
     ['scintillation.include', 'yes', 'must be true or false'],
     ['systemMarginDb', -3, 'must be at least 0 dB (a loss cannot be negative)'],
     ['transmitter.wavelengthM', '1550 nm', 'must be a finite number'],
@@ -83,6 +88,18 @@ describe('LinkDesignSchema', () => {
     expect(issuesOf(withChange('transmitter.powerDbm', value))).toEqual([
       { path: 'transmitter.powerDbm', message: 'must be a finite number' },
     ]);
+  });
+
+  it('accepts every probability at the bounds of the range where its model holds', () => {
+    for (const probability of [PROBABILITY_BOUNDS.fade.min, PROBABILITY_BOUNDS.fade.max]) {
+      expect(LinkDesignSchema.safeParse(withChange('scintillation.probability', probability)).success).toBe(true);
+    }
+    for (const probability of [PROBABILITY_BOUNDS.pointingOutage.min, PROBABILITY_BOUNDS.pointingOutage.max]) {
+      expect(LinkDesignSchema.safeParse(withChange('pointing.outageProbability', probability)).success).toBe(true);
+    }
+    // the message says why, and names the bounds
+    expect(FADE_PROBABILITY_MESSAGE).toMatch(/^must be between 1e-9 and 0\.5: /);
+    expect(POINTING_OUTAGE_PROBABILITY_MESSAGE).toMatch(/^must be between 1e-9 and 0\.5: /);
   });
 
   it('rejects unknown keys with the path of the typo', () => {

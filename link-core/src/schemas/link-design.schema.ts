@@ -7,7 +7,7 @@
  * fail loudly with its path rather than silently fall back to a default.
  */
 import { z } from 'zod';
-import { boundedNumber, lossDb, openProbability, REQUIRED_MESSAGE } from './fields.js';
+import { boundedNumber, boundedProbability, lossDb, probabilityMessage, REQUIRED_MESSAGE } from './fields.js';
 
 /** Defaults applied when a field is absent; evaluateLink applies the same values with `??`. */
 export const LINK_DESIGN_DEFAULTS = {
@@ -26,6 +26,29 @@ export const LINK_DESIGN_DEFAULTS = {
   /** no ageing/dirt allowance unless the engineer sets one (DOMAIN §7 suggests 1–3 dB) */
   systemMarginDb: 0,
 } as const;
+
+/**
+ * Where each probability of a design means something. Both laws are fitted to the body of measured
+ * statistics: below 1e-9 (about 0.03 s a year) the fade or pointing tail is an extrapolation no
+ * measurement supports, and the engine's numbers there would only look precise; above 0.5 the
+ * value is no longer a rare event to hold margin against (common practice: FSO designs use
+ * 1e-2 … 1e-6). The engine itself stays finite far beyond these bounds (fade-tail.test.ts).
+ */
+export const PROBABILITY_BOUNDS = {
+  fade: {
+    min: 1e-9,
+    max: 0.5,
+    reason: 'below 1e-9 (about 0.03 s a year) the gamma-gamma tail is far beyond the fade statistics the model was fitted to, and above 0.5 it is no longer a fade',
+  },
+  pointingOutage: {
+    min: 1e-9,
+    max: 0.5,
+    reason: 'below 1e-9 (about 0.03 s a year) the Gaussian jitter tail says nothing about a real mount, and above 0.5 the loss is no longer an outage allowance',
+  },
+} as const;
+
+export const FADE_PROBABILITY_MESSAGE = probabilityMessage(PROBABILITY_BOUNDS.fade);
+export const POINTING_OUTAGE_PROBABILITY_MESSAGE = probabilityMessage(PROBABILITY_BOUNDS.pointingOutage);
 
 /**
  * Visibility-to-attenuation models available to the budget: Kim (default) and Kruse for haze and
@@ -92,9 +115,9 @@ export const PointingSchema = section({
   staticErrorRad: boundedNumber({ atLeast: 0, atMost: 0.1, unitNote: { upper: '0.1 rad' } }),
   /**
    * outage-based design (DOMAIN §4.2, §8): budget the pointing loss that is exceeded only with this
-   * probability instead of the mean loss. Absent: mean loss.
+   * probability (1e-9 … 0.5, PROBABILITY_BOUNDS.pointingOutage) instead of the mean loss. Absent: mean loss.
    */
-  outageProbability: openProbability().optional(),
+  outageProbability: boundedProbability(PROBABILITY_BOUNDS.pointingOutage).optional(),
 });
 
 export const AtmosphereSchema = section({
@@ -111,8 +134,8 @@ export const AtmosphereSchema = section({
 export const ScintillationSchema = section({
   /** subtract the gamma-gamma fade margin (spherical wave, aperture averaged, DOMAIN §6.5–6.7) */
   include: z.boolean({ error: 'must be true or false' }).default(LINK_DESIGN_DEFAULTS.scintillationInclude),
-  /** probability that the irradiance falls below the margin's threshold */
-  probability: openProbability().default(LINK_DESIGN_DEFAULTS.scintillationProbability),
+  /** probability that the irradiance falls below the margin's threshold, 1e-9 … 0.5 (PROBABILITY_BOUNDS.fade) */
+  probability: boundedProbability(PROBABILITY_BOUNDS.fade).default(LINK_DESIGN_DEFAULTS.scintillationProbability),
 });
 
 export const LinkDesignSchema = section({
