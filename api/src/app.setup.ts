@@ -17,6 +17,10 @@ export const API_PREFIX = 'api';
 export function configureApp(app: INestApplication): void {
   const expressApp = app as NestExpressApplication;
   expressApp.disable('x-powered-by');
+  // request.ip (the sign-in limit per address) believes X-Forwarded-For only from this many
+  // proxies; 0 (the default) keeps express's `trust proxy` off: the connection's address counts.
+  const hops = app.get(ConfigService).get<AppConfig>('app')?.trustProxyHops ?? 0;
+  if (hops > 0) expressApp.set('trust proxy', hops);
   // Our own JSON parser (the app is created with bodyParser: false) so that a malformed body
   // gets the API's error shape instead of express's HTML page.
   expressApp.use(express.json({ limit: '1mb' }));

@@ -2,15 +2,20 @@ import { Module } from '@nestjs/common';
 import { ConfigModule } from '@nestjs/config';
 import { JwtModule } from '@nestjs/jwt';
 import { PassportModule } from '@nestjs/passport';
+import { ThrottlerModule } from '@nestjs/throttler';
 import { authConfig, type AuthConfig } from '../config/auth.config.js';
+import { RateLimitsModule } from '../rate-limits/rate-limits.module.js';
+import { PostgresThrottlerStorage } from '../rate-limits/postgres-throttler.storage.js';
 import { UsersModule } from '../users/users.module.js';
 import { AuthController } from './auth.controller.js';
 import { AuthService } from './auth.service.js';
 import { JwtStrategy } from './jwt.strategy.js';
+import { signInThrottlerOptions } from './sign-in-throttle.js';
 
 @Module({
   imports: [
     UsersModule,
+    RateLimitsModule,
     PassportModule,
     JwtModule.registerAsync({
       imports: [ConfigModule.forFeature(authConfig)],
@@ -20,6 +25,13 @@ import { JwtStrategy } from './jwt.strategy.js';
         signOptions: { algorithm: 'HS256', expiresIn: config.jwtExpiresInS },
         verifyOptions: { algorithms: ['HS256'] },
       }),
+    }),
+    // The sign-in limits (ThrottlerModule is global, but only SignInThrottlerGuard on the login
+    // route applies them; there is no global ThrottlerGuard).
+    ThrottlerModule.forRootAsync({
+      imports: [ConfigModule.forFeature(authConfig), RateLimitsModule],
+      inject: [authConfig.KEY, PostgresThrottlerStorage],
+      useFactory: signInThrottlerOptions,
     }),
   ],
   controllers: [AuthController],

@@ -11,6 +11,7 @@ export const appConfig = registerAs('app', () => {
     host: env.HOST,
     uiDistDir: env.UI_DIST_DIR ? resolve(env.UI_DIST_DIR) : resolve(CHECKOUT_ROOT, 'ui', 'dist'),
     demoPassword: env.DEMO_PASSWORD,
+    trustProxyHops: env.TRUST_PROXY_HOPS,
   };
 });
 export type AppConfig = ReturnType<typeof appConfig>;
