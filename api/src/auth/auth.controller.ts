@@ -2,6 +2,8 @@ import { Body, Controller, Get, HttpCode, HttpStatus, Post, Req, UseGuards } fro
 import {
   ApiBearerAuth,
   ApiBody,
+  ApiForbiddenResponse,
+  ApiNoContentResponse,
   ApiOkResponse,
   ApiTags,
   ApiTooManyRequestsResponse,
@@ -41,6 +43,7 @@ export class AuthController {
   @ApiBody({ schema: openApiSchema(LoginRequestSchema) })
   @ApiOkResponse({ schema: openApiSchema(LoginResponseSchema, 'output') })
   @ApiUnauthorizedResponse({ description: 'Unknown e-mail or wrong password (one message for both)' })
+  @ApiForbiddenResponse({ description: 'The right password for a deactivated account' })
   @ApiTooManyRequestsResponse({
     description:
       'Too many sign-in attempts for this account or from this address within the window (settings SIGN_IN_*); the Retry-After header and retryAfterS give the seconds to wait',
@@ -50,6 +53,15 @@ export class AuthController {
     const response = await this.auth.login(body);
     await forgiveSignIn(request, this.throttleStorage);
     return response;
+  }
+
+  @Post('logout')
+  @HttpCode(HttpStatus.NO_CONTENT)
+  @ApiBearerAuth()
+  @ApiNoContentResponse({ description: 'The session of this token has ended; the token is refused from now on' })
+  @ApiUnauthorizedResponse({ description: 'No token, or its session has already ended' })
+  async logout(@CurrentUser() caller: AuthUser): Promise<void> {
+    await this.auth.logout(caller);
   }
 
   @Get('me')
