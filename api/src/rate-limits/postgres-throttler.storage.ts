@@ -21,7 +21,8 @@ interface CounterRow {
  * blocks the key for `blockDuration`; once the window or the block has ended the next hit starts
  * afresh. Each hit is one `INSERT … ON CONFLICT … DO UPDATE … RETURNING`, which PostgreSQL runs
  * atomically per row, so concurrent attempts cannot both see the last free slot. Times come from
- * the database clock, so processes with skewed clocks still agree.
+ * the database clock, so processes with skewed clocks still agree: clock_timestamp(), not now(),
+ * because a hit that waited for the row lock must not judge the row by the time it started.
  */
 @Injectable()
 export class PostgresThrottlerStorage implements ThrottlerStorage {
@@ -35,25 +36,25 @@ export class PostgresThrottlerStorage implements ThrottlerStorage {
     // before this hit; `restart` (window or block over) and `blocked` are spelt out in each SET.
     const rows: CounterRow[] = await this.dataSource.query(
       `INSERT INTO rate_limit_counter AS counter (key, throttler, hits, window_ends_at, blocked_until)
-       VALUES ($1, $2, 1, now() + make_interval(secs => $3::float8 / 1000),
-               CASE WHEN 1 > $4::int THEN now() + make_interval(secs => $5::float8 / 1000) END)
+       VALUES ($1, $2, 1, clock_timestamp() + make_interval(secs => $3::float8 / 1000),
+               CASE WHEN 1 > $4::int THEN clock_timestamp() + make_interval(secs => $5::float8 / 1000) END)
        ON CONFLICT (key) DO UPDATE SET
          hits = CASE
-           WHEN counter.blocked_until > now() THEN counter.hits
-           WHEN counter.window_ends_at <= now() OR counter.blocked_until <= now() THEN 1
+           WHEN counter.blocked_until > clock_timestamp() THEN counter.hits
+           WHEN counter.window_ends_at <= clock_timestamp() OR counter.blocked_until <= clock_timestamp() THEN 1
            ELSE counter.hits + 1 END,
          window_ends_at = CASE
-           WHEN counter.blocked_until > now() THEN counter.window_ends_at
-           WHEN counter.window_ends_at <= now() OR counter.blocked_until <= now() THEN EXCLUDED.window_ends_at
+           WHEN counter.blocked_until > clock_timestamp() THEN counter.window_ends_at
+           WHEN counter.window_ends_at <= clock_timestamp() OR counter.blocked_until <= clock_timestamp() THEN EXCLUDED.window_ends_at
            ELSE counter.window_ends_at END,
          blocked_until = CASE
-           WHEN counter.blocked_until > now() THEN counter.blocked_until
-           WHEN (CASE WHEN counter.window_ends_at <= now() OR counter.blocked_until <= now() THEN 1 ELSE counter.hits + 1 END) > $4::int
-             THEN now() + make_interval(secs => $5::float8 / 1000)
+           WHEN counter.blocked_until > clock_timestamp() THEN counter.blocked_until
+           WHEN (CASE WHEN counter.window_ends_at <= clock_timestamp() OR counter.blocked_until <= clock_timestamp() THEN 1 ELSE counter.hits + 1 END) > $4::int
+             THEN clock_timestamp() + make_interval(secs => $5::float8 / 1000)
            ELSE NULL END
        RETURNING hits,
-         extract(epoch FROM window_ends_at - now()) * 1000 AS expires_in_ms,
-         extract(epoch FROM blocked_until - now()) * 1000 AS blocked_for_ms`,
+         extract(epoch FROM window_ends_at - clock_timestamp()) * 1000 AS expires_in_ms,
+         extract(epoch FROM blocked_until - clock_timestamp()) * 1000 AS blocked_for_ms`,
       [key, throttlerName, ttl, limit, blockDuration],
     );
     const row = rows[0];
@@ -77,7 +78,7 @@ export class PostgresThrottlerStorage implements ThrottlerStorage {
       .createQueryBuilder()
       .update(RateLimitCounter)
       .set({ hits: () => 'greatest(hits - 1, 0)' })
-      .where('key = :key AND window_ends_at > now() AND (blocked_until IS NULL OR blocked_until <= now())', { key })
+      .where('key = :key AND window_ends_at > clock_timestamp() AND (blocked_until IS NULL OR blocked_until <= clock_timestamp())', { key })
       .execute();
   }
 
@@ -87,7 +88,7 @@ export class PostgresThrottlerStorage implements ThrottlerStorage {
       .createQueryBuilder()
       .delete()
       .from(RateLimitCounter)
-      .where('window_ends_at <= now() AND (blocked_until IS NULL OR blocked_until <= now())')
+      .where('window_ends_at <= clock_timestamp() AND (blocked_until IS NULL OR blocked_until <= clock_timestamp())')
       .execute();
     return result.affected ?? 0;
   }
