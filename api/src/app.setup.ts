@@ -23,6 +23,10 @@ export function configureApp(app: INestApplication): void {
   const config = app.get(ConfigService).get<AppConfig>('app');
   const requestTimeoutMs = config?.requestTimeoutMs ?? 30_000;
   expressApp.disable('x-powered-by');
+  // request.ip (the sign-in limit per address) believes X-Forwarded-For only from this many
+  // proxies; 0 (the default) keeps express's `trust proxy` off: the connection's address counts.
+  const hops = config?.trustProxyHops ?? 0;
+  if (hops > 0) expressApp.set('trust proxy', hops);
   applyServerTimeouts(expressApp.getHttpServer() as Server, {
     requestTimeoutMs,
     headersTimeoutMs: Math.min(20_000, requestTimeoutMs),

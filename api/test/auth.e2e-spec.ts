@@ -81,7 +81,9 @@ describe('sign-in, tokens and roles (e2e)', () => {
   it('rejects an expired token', async () => {
     const jwt = new JwtService({ secret: process.env.JWT_SECRET });
     const nowS = Math.floor(Date.now() / 1000);
-    const claims = { sub: north.members.engineer.id, org: north.id, role: 'engineer' };
+    // the claims of a real sign-in (its session is live), re-signed with other times
+    const { sub, org, sid } = jwt.decode<{ sub: string; org: string; sid: string }>(north.members.engineer.token);
+    const claims = { sub, org, sid };
     const expired = jwt.sign({ ...claims, iat: nowS - 120, exp: nowS - 60 });
     const response = await http().get('/api/auth/me').set('Authorization', `Bearer ${expired}`).expect(401);
     expect(response.body.message).toMatch(/expired/);

@@ -47,6 +47,28 @@ describe('signing in through the UI', () => {
     });
   }
 
+  it('ends the token on the server when signing out: a copy of it is refused afterwards', async () => {
+    const { page } = browser;
+    await page.goto(`${BASE_URL}/sign-in`);
+    await page.evaluate(() => window.localStorage.clear());
+    await signIn(page, 'reviewer@demo.test');
+    const token = await page.evaluate(() => JSON.parse(window.localStorage.getItem('beamwright.session') ?? '{}').accessToken);
+    assert.ok(typeof token === 'string' && token.length > 0, 'the signed-in page keeps its token');
+    const before = await fetch(`${BASE_URL}/api/auth/me`, { headers: { Authorization: `Bearer ${token}` } });
+    assert.equal(before.status, 200);
+
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    await page.getByRole('heading', { name: 'Sign in' }).waitFor();
+    // the sign-out request is best effort and not awaited by the page: give it a moment
+    let after;
+    for (let attempt = 0; attempt < 20; attempt += 1) {
+      after = await fetch(`${BASE_URL}/api/auth/me`, { headers: { Authorization: `Bearer ${token}` } });
+      if (after.status === 401) break;
+      await new Promise((resolve) => setTimeout(resolve, 100));
+    }
+    assert.equal(after.status, 401);
+  });
+
   it('reports no script errors in the page', () => {
     assert.deepEqual(browser.consoleErrors, []);
   });

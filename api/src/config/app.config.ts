@@ -13,6 +13,7 @@ export const appConfig = registerAs('app', () => {
     demoPassword: env.DEMO_PASSWORD,
     hstsMaxAgeSeconds: env.HSTS_MAX_AGE_SECONDS,
     requestTimeoutMs: env.HTTP_REQUEST_TIMEOUT_SECONDS * 1000,
+    trustProxyHops: env.TRUST_PROXY_HOPS,
   };
 });
 export type AppConfig = ReturnType<typeof appConfig>;

@@ -6,6 +6,11 @@ export const authConfig = registerAs('auth', () => {
   return {
     jwtSecret: env.JWT_SECRET,
     jwtExpiresInS: expiresInToSeconds(env.JWT_EXPIRES_IN),
+    signInLimits: {
+      attemptsPerAccount: env.SIGN_IN_MAX_ATTEMPTS_PER_ACCOUNT,
+      attemptsPerAddress: env.SIGN_IN_MAX_ATTEMPTS_PER_ADDRESS,
+      windowMs: expiresInToSeconds(env.SIGN_IN_ATTEMPT_WINDOW) * 1000,
+    },
   };
 });
 export type AuthConfig = ReturnType<typeof authConfig>;

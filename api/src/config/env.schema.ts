@@ -5,6 +5,12 @@
 import { z } from 'zod';
 
 const port = (fallback: number) => z.coerce.number().int().min(1).max(65_535).default(fallback);
+const duration = (fallback: string) =>
+  z
+    .string()
+    .regex(/^\d+[smhd]?$/, 'must be seconds or a number followed by s, m, h or d (e.g. 8h)')
+    .default(fallback);
+const attemptCount = (fallback: number) => z.coerce.number().int().min(1, 'must be at least 1').max(1_000_000).default(fallback);
 
 export const EnvSchema = z.object({
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
@@ -18,10 +24,18 @@ export const EnvSchema = z.object({
   /** HMAC secret of the access tokens; at least 16 characters so a placeholder cannot slip through */
   JWT_SECRET: z.string().min(16, 'must be at least 16 characters'),
   /** token lifetime: seconds, or a number with s/m/h/d (e.g. 8h) */
-  JWT_EXPIRES_IN: z
-    .string()
-    .regex(/^\d+[smhd]?$/, 'must be seconds or a number followed by s, m, h or d (e.g. 8h)')
-    .default('8h'),
+  JWT_EXPIRES_IN: duration('8h'),
+  /** sign-in attempts one account may make per window (the e-mail, lower-cased and trimmed, is the key) */
+  SIGN_IN_MAX_ATTEMPTS_PER_ACCOUNT: attemptCount(5),
+  /** sign-in attempts one client address may make per window, whatever the accounts */
+  SIGN_IN_MAX_ATTEMPTS_PER_ADDRESS: attemptCount(30),
+  /** the window of both limits, and how long a key stays refused once over its limit */
+  SIGN_IN_ATTEMPT_WINDOW: duration('15m'),
+  /**
+   * proxies in front of the app whose X-Forwarded-For is believed (express `trust proxy` as a hop
+   * count). 0, the default: the client address is the connection's, and the header is ignored.
+   */
+  TRUST_PROXY_HOPS: z.coerce.number().int().min(0).max(10).default(0),
   DEMO_PASSWORD: z.string().min(8, 'must be at least 8 characters').default('demo-pass-2026'),
   /** Strict-Transport-Security max-age in seconds; 0 (the default) sends none: set it only behind TLS */
   HSTS_MAX_AGE_SECONDS: z.coerce.number().int().min(0).max(63_072_000).default(0),

@@ -2,13 +2,14 @@ import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { In, Repository } from 'typeorm';
 import { User } from './user.entity.js';
+import { normaliseEmail } from './normalise-email.js';
 
 @Injectable()
 export class UsersService {
   constructor(@InjectRepository(User) private readonly users: Repository<User>) {}
 
   findByEmail(email: string): Promise<User | null> {
-    return this.users.findOne({ where: { email: email.trim().toLowerCase() } });
+    return this.users.findOne({ where: { email: normaliseEmail(email) } });
   }
 
   findInOrganisation(organisationId: string, userId: string): Promise<User | null> {

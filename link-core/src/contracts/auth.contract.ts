@@ -1,5 +1,6 @@
 /** Sign-in and the signed-in user. */
 import { z } from 'zod';
+import { ErrorBodySchema } from './error.contract.js';
 
 /**
  * One role per user: `admin` manages members and settings (and may do what an engineer does),
@@ -41,3 +42,26 @@ export const MeResponseSchema = z.object({
   role: RoleSchema,
 });
 export type MeResponse = z.infer<typeof MeResponseSchema>;
+
+/**
+ * 429 from `POST /api/auth/login` when an account or a client address has used up its sign-in
+ * attempts. The same number of seconds travels in the `Retry-After` header.
+ */
+export const TooManyRequestsBodySchema = ErrorBodySchema.extend({
+  statusCode: z.literal(429),
+  /** seconds until sign-in is accepted again (equals the Retry-After header) */
+  retryAfterS: z.number().int().positive(),
+});
+export type TooManyRequestsBody = z.infer<typeof TooManyRequestsBodySchema>;
+
+/**
+ * The sentence the api answers and the ui shows when sign-in is refused for too many attempts,
+ * rounded up to whole minutes from one minute on, so nobody is told to come back too early.
+ * @param retryAfterS seconds until sign-in is accepted again (≥ 0)
+ */
+export function tooManySignInAttemptsMessage(retryAfterS: number): string {
+  const seconds = Math.max(1, Math.ceil(retryAfterS));
+  if (seconds < 60) return `Too many sign-in attempts. Try again in ${seconds} ${seconds === 1 ? 'second' : 'seconds'}.`;
+  const minutes = Math.ceil(seconds / 60);
+  return `Too many sign-in attempts. Try again in ${minutes} ${minutes === 1 ? 'minute' : 'minutes'}.`;
+}

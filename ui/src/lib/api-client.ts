@@ -19,13 +19,16 @@ export interface ApiErrorBody {
 export class ApiError extends Error {
   readonly status: number;
   readonly body: ApiErrorBody | null;
+  /** seconds to wait before trying again, from the Retry-After header (e.g. on a 429); null without one */
+  readonly retryAfterS: number | null;
 
-  constructor(status: number, body: ApiErrorBody | null, fallbackMessage: string) {
+  constructor(status: number, body: ApiErrorBody | null, fallbackMessage: string, retryAfterS: number | null = null) {
     const message = Array.isArray(body?.message) ? body.message.join('; ') : body?.message;
     super(message || fallbackMessage);
     this.name = 'ApiError';
     this.status = status;
     this.body = body;
+    this.retryAfterS = retryAfterS;
   }
 
   get issues(): ApiFieldIssue[] {
@@ -44,6 +47,11 @@ export interface RequestOptions {
   signal?: AbortSignal;
   /** false for the sign-in call itself: a 401 there means wrong credentials, not an expired session */
   authenticated?: boolean;
+  /**
+   * false where a 401 must not drop the stored token: the sign-out call, whose answer may arrive
+   * after the next user has signed in
+   */
+  dropSessionOn401?: boolean;
 }
 
 function buildUrl(path: string, params?: Record<string, QueryValue>): string {
@@ -56,6 +64,14 @@ function buildUrl(path: string, params?: Record<string, QueryValue>): string {
   }
   const query = search.toString();
   return query ? `${url}?${query}` : url;
+}
+
+/** Retry-After in seconds: the delay form (`120`) or an HTTP date; null when absent or unreadable. */
+export function parseRetryAfter(value: string | null, nowMs = Date.now()): number | null {
+  if (value === null || value.trim() === '') return null;
+  if (/^\d+$/.test(value.trim())) return Number(value.trim());
+  const atMs = Date.parse(value);
+  return Number.isNaN(atMs) ? null : Math.max(0, Math.ceil((atMs - nowMs) / 1000));
 }
 
 async function readBody(response: Response): Promise<unknown> {
@@ -93,9 +109,14 @@ async function request<T>(method: string, path: string, body: unknown, options: 
   if (!response.ok) {
     // An authenticated call refused with 401 means the session is over: dropping the token
     // makes the route guard send the user back to the sign-in page.
-    if (response.status === 401 && authenticated) clearSessionToken();
+    if (response.status === 401 && authenticated && (options.dropSessionOn401 ?? true)) clearSessionToken();
     const errorBody = payload && typeof payload === 'object' ? (payload as ApiErrorBody) : null;
-    throw new ApiError(response.status, errorBody, `Request failed (${response.status} ${response.statusText || 'error'})`);
+    throw new ApiError(
+      response.status,
+      errorBody,
+      `Request failed (${response.status} ${response.statusText || 'error'})`,
+      parseRetryAfter(response.headers.get('Retry-After')),
+    );
   }
   return payload as T;
 }

@@ -51,9 +51,15 @@ export function useSignIn() {
   });
 }
 
+/** Ends the session on the server too, so the token is refused even if a copy of it survives. */
+export const signOutOnServer = () => api.post<void>('/auth/logout', undefined, { dropSessionOn401: false });
+
 export function useSignOut() {
   const queryClient = useQueryClient();
   return () => {
+    // Best effort: the request takes the token now, and the local state goes whatever it answers
+    // (offline, or a session that had already ended).
+    signOutOnServer().catch(() => undefined);
     clearSessionToken();
     // Nothing fetched or typed by one user may be shown to the next in this tab.
     queryClient.clear();

@@ -11,6 +11,8 @@ export interface MockRoute {
   path: string | RegExp;
   status?: number;
   body?: unknown | ((request: { url: URL; body: unknown; headers: Headers }) => unknown);
+  /** response headers besides Content-Type (e.g. Retry-After) */
+  headers?: Record<string, string>;
 }
 
 export interface RecordedCall {
@@ -44,7 +46,7 @@ export function mockApi(routes: MockRoute[]) {
     const payload = typeof route.body === 'function' ? route.body({ url, body, headers }) : route.body;
     return new Response(payload === undefined ? null : JSON.stringify(payload), {
       status: route.status ?? 200,
-      headers: { 'Content-Type': 'application/json' },
+      headers: { 'Content-Type': 'application/json', ...route.headers },
     });
   });
   vi.stubGlobal('fetch', fetchMock);

@@ -5,5 +5,13 @@
 import { CreateOrganisationsAndUsers1796185289124 } from './1796185289124-CreateOrganisationsAndUsers.js';
 import { CreateSites1796185423186 } from './1796185423186-CreateSites.js';
 import { CreateEquipmentLinksRevisionsReviews1796185633635 } from './1796185633635-CreateEquipmentLinksRevisionsReviews.js';
+import { CreateRateLimitCounters1796200000000 } from './1796200000000-CreateRateLimitCounters.js';
+import { CreateUserSessionsAndDeactivation1796200100000 } from './1796200100000-CreateUserSessionsAndDeactivation.js';
 
-export const MIGRATIONS = [CreateOrganisationsAndUsers1796185289124, CreateSites1796185423186, CreateEquipmentLinksRevisionsReviews1796185633635];
+export const MIGRATIONS = [
+  CreateOrganisationsAndUsers1796185289124,
+  CreateSites1796185423186,
+  CreateEquipmentLinksRevisionsReviews1796185633635,
+  CreateRateLimitCounters1796200000000,
+  CreateUserSessionsAndDeactivation1796200100000,
+];

@@ -9,6 +9,7 @@ import {
   makeStyles,
   tokens,
 } from '@fluentui/react-components';
+import { tooManySignInAttemptsMessage } from '@beamwright/link-core/contracts';
 import { isApiError } from '@/lib/api-client';
 import { useSignIn } from '@/lib/auth';
 
@@ -67,7 +68,9 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
             return;
           }
           if (isApiError(error, 429)) {
-            setFormError('Too many attempts. Wait a minute, then try again.');
+            // the wait comes from Retry-After (or the body's retryAfterS); the api's own words otherwise
+            const retryAfterS = error.retryAfterS ?? (typeof error.body?.retryAfterS === 'number' ? error.body.retryAfterS : null);
+            setFormError(retryAfterS !== null ? tooManySignInAttemptsMessage(retryAfterS) : error.message);
             return;
           }
           setFormError(error instanceof Error ? error.message : 'Signing in failed. Try again.');

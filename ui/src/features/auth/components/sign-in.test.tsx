@@ -1,5 +1,5 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { screen, waitFor } from '@testing-library/react';
+import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { demoEngineer, mockApi, renderApp } from '@/testing/test-utils';
 import { getSessionToken, setSessionToken } from '@/lib/session-token';
@@ -64,6 +64,47 @@ describe('sign-in page', () => {
     await userEvent.type(screen.getByLabelText(/Password/), 'p');
     await userEvent.click(screen.getByRole('button', { name: 'Sign in' }));
     expect(await screen.findByText('must be an e-mail address')).toBeInTheDocument();
+  });
+
+  it('says when to try again after too many attempts, from Retry-After, next to the form', async () => {
+    const { calls } = mockApi([
+      {
+        method: 'POST',
+        path: '/auth/login',
+        status: 429,
+        headers: { 'Retry-After': '840' },
+        body: { statusCode: 429, error: 'Too Many Requests', message: 'Too many sign-in attempts. Try again in 14 minutes.', retryAfterS: 840 },
+      },
+    ]);
+    renderApp('/sign-in');
+    await userEvent.type(await screen.findByLabelText(/Email address/), 'engineer@demo.test');
+    await userEvent.type(screen.getByLabelText(/Password/), 'one-more-guess');
+    await userEvent.click(screen.getByRole('button', { name: 'Sign in' }));
+
+    const alert = await screen.findByRole('alert');
+    expect(alert).toHaveTextContent('Too many sign-in attempts. Try again in 14 minutes.');
+    expect(within(screen.getByRole('form', { name: 'Sign in' })).getByRole('alert')).toBe(alert);
+    // not a wrong password: the fields are not marked
+    expect(screen.getByLabelText(/Password/)).not.toHaveAttribute('aria-invalid', 'true');
+    expect(calls).toHaveLength(1);
+    expect(getSessionToken()).toBeNull();
+  });
+
+  it('takes the wait from the Retry-After header even when the body does not carry it', async () => {
+    mockApi([
+      {
+        method: 'POST',
+        path: '/auth/login',
+        status: 429,
+        headers: { 'Retry-After': '45' },
+        body: { statusCode: 429, error: 'Too Many Requests', message: 'Too Many Requests' },
+      },
+    ]);
+    renderApp('/sign-in');
+    await userEvent.type(await screen.findByLabelText(/Email address/), 'engineer@demo.test');
+    await userEvent.type(screen.getByLabelText(/Password/), 'x');
+    await userEvent.click(screen.getByRole('button', { name: 'Sign in' }));
+    expect(await screen.findByRole('alert')).toHaveTextContent('Too many sign-in attempts. Try again in 45 seconds.');
   });
 
   it('signs in, stores the token and returns to the page that was asked for', async () => {
