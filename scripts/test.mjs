@@ -7,18 +7,19 @@
 // on port 3100 for the browser tests. Prints a per-suite table and, as its very last line,
 // "N passed, N failed, N skipped". Exits non-zero when anything failed.
 //
-// Options (environment): TEST_DATABASE_PORT (54339), TEST_SERVER_PORT (3100),
-// TEST_ONLY=lint,typecheck,... (run a subset; the names are the first words of the table rows).
+// Options (environment): TEST_DATABASE_PORT (54339), TEST_SERVER_PORT (3100), FUZZ_SECONDS (60),
+// TEST_ONLY=lint,typecheck,... (run a subset; the names: lint, typecheck, scripts, link-core, api,
+// ui, browser, fuzz).
 
 import { spawn } from 'node:child_process';
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { ensurePostgresBinaries, ensureRoleAndDatabase, findFreePort, isPortInUse, startThrowawayPostgres } from './lib/postgres.mjs';
-import { ensureChromium, ensureNodeModules } from './lib/dependencies.mjs';
-import { DEFAULT_ENV } from './lib/environment.mjs';
-import { ROOT_DIR, WORKSPACES } from './lib/paths.mjs';
-import { killRunningChildren, runCommand, step, waitForHealth } from './lib/processes.mjs';
+import {
+  DEFAULT_ENV, ROOT_DIR, WORKSPACES, ensureChromium, ensureNodeModules, killRunningChildren, runCommand, step,
+  waitForHealth,
+} from './lib/project.mjs';
 import { countNodeTestSummary, countVitest } from './lib/test-reports.mjs';
 
 const SUITE_TIMEOUT_MS = 12 * 60_000;
@@ -196,7 +197,7 @@ async function main() {
 
   // The api (Node) imports link-core's dist/: build it before the api suites.
   let linkCoreBuilt = false;
-  if (selected('api') || selected('browser')) {
+  if (selected('api') || selected('browser') || selected('fuzz')) {
     linkCoreBuilt = (await checkStep('build', 'build link-core', 'npm', ['run', 'build', '-w', '@beamwright/link-core'])).failed === 0;
   }
   if (selected('api')) {
@@ -206,7 +207,7 @@ async function main() {
 
   if (selected('ui')) await vitestSuite('ui', 'ui component tests', '@beamwright/ui', testEnv);
 
-  if (selected('browser')) await browserSuite(testEnv, serverPort);
+  if (selected('browser') || selected('fuzz')) await browserSuite(testEnv, serverPort);
 }
 
 /** eslint once, with a JSON report we print as `file:line:column  rule  message` and count. */
@@ -268,7 +269,11 @@ async function browserSuite(testEnv, wantedPort) {
   const baseUrl = `http://127.0.0.1:${serverPort}`;
   const serverLog = path.join(workDir, 'server.log');
   const logStream = fs.createWriteStream(serverLog);
-  server = spawn(process.execPath, [path.join(ROOT_DIR, 'api', 'dist', 'main.js')], { cwd: ROOT_DIR, env, stdio: ['ignore', 'pipe', 'pipe'] });
+  // The probe records the longest event-loop block while the server serves the browser and fuzz suites.
+  const eventLoopReport = path.join(workDir, 'event-loop.json');
+  server = spawn(process.execPath, ['--import', './api/test/fuzz/event-loop-probe.mjs', path.join(ROOT_DIR, 'api', 'dist', 'main.js')], {
+    cwd: ROOT_DIR, env: { ...env, EVENT_LOOP_REPORT: eventLoopReport }, stdio: ['ignore', 'pipe', 'pipe'],
+  });
   server.stdout.pipe(logStream);
   server.stderr.pipe(logStream);
   try {
@@ -280,11 +285,23 @@ async function browserSuite(testEnv, wantedPort) {
     return;
   }
   try {
-    await nodeTestSuite('browser', 'ui browser tests (chromium)', 'npm', ['run', 'e2e', '-w', '@beamwright/ui'], {
-      env: { ...env, BASE_URL: baseUrl, CHROMIUM_PATH: '/usr/bin/chromium' },
-    });
+    if (selected('browser')) {
+      await nodeTestSuite('browser', 'ui browser tests (chromium)', 'npm', ['run', 'e2e', '-w', '@beamwright/ui'], {
+        env: { ...env, BASE_URL: baseUrl, CHROMIUM_PATH: '/usr/bin/chromium' },
+      });
+    }
+    // Last, on the same server and database: it writes hostile (but valid) rows of its own.
+    if (selected('fuzz')) {
+      await nodeTestSuite('fuzz', 'api fuzz (hostile requests, about a minute)', process.execPath, [
+        '--test', '--test-reporter=tap', path.join('api', 'test', 'fuzz', 'hostile-requests.fuzz.mjs'),
+      ], { env: { ...env, BASE_URL: baseUrl } });
+    }
   } finally {
     await stopServer();
+    if (fs.existsSync(eventLoopReport)) {
+      const loop = JSON.parse(fs.readFileSync(eventLoopReport, 'utf8'));
+      process.stdout.write(`  server event loop while serving the browser and fuzz suites: longest block ${loop.maxMs} ms, p99 ${loop.p99Ms} ms (${loop.samples} samples)\n`);
+    }
     const failedBrowser = results.at(-1)?.failed > 0;
     if (failedBrowser) {
       process.stdout.write(`--- server output (last lines) ---\n${fs.readFileSync(serverLog, 'utf8').slice(-3000)}\n`);
