@@ -6,19 +6,11 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { DATA_DIR, ROOT_DIR } from './paths.mjs';
 
-/** Local defaults of every setting the api reads (documented in .env.example). */
-export const DEFAULT_ENV = {
-  NODE_ENV: 'production',
-  PORT: '3000',
-  HOST: '127.0.0.1',
-  DATABASE_HOST: '127.0.0.1',
-  DATABASE_PORT: '54329',
-  DATABASE_USER: 'beamwright',
-  DATABASE_PASSWORD: 'beamwright-local',
-  DATABASE_NAME: 'beamwright',
-  JWT_EXPIRES_IN: '8h',
-  DEMO_PASSWORD: 'demo-pass-2026',
-};
+/**
+ * Local defaults of every setting the api reads: the api's own list (its env schema reads the same
+ * file), documented in .env.example.
+ */
+export const DEFAULT_ENV = JSON.parse(fs.readFileSync(path.join(ROOT_DIR, 'api', 'src', 'config', 'env-defaults.json'), 'utf8'));
 
 /** The four demo sign-ins seeded by the api (fixtures/demo). */
 export const DEMO_USERS = [
