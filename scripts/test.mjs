@@ -189,7 +189,11 @@ async function main() {
 
   if (selected('scripts')) {
     // Listed explicitly: given the folder, node would also pick up scripts/test.mjs itself.
-    const files = fs.readdirSync(path.join(ROOT_DIR, 'scripts', 'lib')).filter((file) => file.endsWith('.test.mjs')).map((file) => path.join('scripts', 'lib', file));
+    const files = [
+      ...fs.readdirSync(path.join(ROOT_DIR, 'scripts', 'lib')).filter((file) => file.endsWith('.test.mjs')).map((file) => path.join('scripts', 'lib', file)),
+      // Recomputes the reference cases with Debian's python3 packages; skipped when they are absent.
+      path.join('fixtures', 'reference', 'recompute.test.mjs'),
+    ];
     await nodeTestSuite('scripts', 'scripts self-tests (node:test)', process.execPath, ['--test', '--test-reporter=tap', ...files], {});
   }
 

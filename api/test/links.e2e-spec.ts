@@ -64,7 +64,7 @@ describe('links and immutable revisions (e2e)', () => {
     expect(detail.body.budget).toStrictEqual(expected);
     expect(RevisionSchema.parse(revision.body).budget).toStrictEqual(expected);
     expect(detail.body.linkMarginDb).toBe(expected.linkMarginDb);
-    // sanity against the worked example LB-01 of the domain notes (DOMAIN.md §8): margin 12.33 dB
+    // sanity against the worked example LB-01 (link-core/METHODS.md §10.1): margin 12.33 dB
     expect(expected.linkMarginDb).toBeCloseTo(12.33, 1);
   });
 

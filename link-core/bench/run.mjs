@@ -27,7 +27,7 @@ function seededRandom(seed) {
 
 const WAVELENGTHS_M = [785e-9, 850e-9, 1310e-9, 1550e-9];
 
-/** Designs across the span of practice (DOMAIN §6.1, §7): ranges 0.2–5 km, fog to clear air, calm to strong turbulence. */
+/** Designs across the span of practice (METHODS.md §6.1, §7): ranges 0.2–5 km, fog to clear air, calm to strong turbulence. */
 function generateDesigns(count, seed, includeScintillation) {
   const random = seededRandom(seed);
   const uniform = (min, max) => min + (max - min) * random();

@@ -44,28 +44,28 @@ export { DB_PER_NATURAL_LOG_POWER, WGS84_ELLIPSOID, GRS80_ELLIPSOID, MEAN_EARTH_
 export type { Ellipsoid } from './units/constants.js';
 export { ratioToDb, dbToRatio, fractionToLossDb, wattsToDbm, dbmToWatts } from './units/decibels.js';
 
-// Gaussian beams (DOMAIN §1)
+// Gaussian beams (METHODS.md §1)
 export { rayleighRangeM, diffractionHalfAngleRad, beamRadiusFromWaistM, wavefrontRadiusFromWaistM, gouyPhaseRad, gaussianBeam } from './beam/gaussian-beam.js';
 export type { GaussianBeamInput, GaussianBeam } from './beam/gaussian-beam.js';
 export { gaussianPeakIntensityWPerM2, relativeIntensity, gaussianIntensityWPerM2, encircledPowerFraction } from './beam/intensity.js';
 export { andrewsPhillipsBeamParameters, defocusedLaunch, launchBeamRadiusAtRangeM, beamRadiusAtRangeM, linearSpotRadiusM, quadratureSpotRadiusM } from './beam/launch.js';
 export type { LaunchedBeamInput, AndrewsPhillipsParameters, DefocusedLaunchInput, DefocusedLaunch, BeamRadiusAtRangeInput } from './beam/launch.js';
 
-// Transmit aperture (DOMAIN §2)
+// Transmit aperture (METHODS.md §2)
 export { truncationGainEfficiency, transmittedFraction, optimumTruncation, uniformApertureGain, truncatedGaussianGain, fraunhoferDistanceM, onAxisFarFieldIrradianceWPerM2, gaussianBeamOnAxisGain, friisPowerRatio, transmitApertureForSpot } from './transmit/truncation.js';
 export type { OptimumTruncation, TransmitApertureForSpotInput, TransmitApertureForSpot } from './transmit/truncation.js';
 
-// Receive capture (DOMAIN §3)
+// Receive capture (METHODS.md §3)
 export { centredCaptureFraction, annularCaptureFraction, offsetCaptureFraction, captureFraction, geometricLossDb, smallApertureCaptureApproximation, faridHranilovicCapture, faridHranilovicCaptureFraction, topHatCaptureRatio, offsetForRelativeCapture, fieldOfViewCheck } from './capture/capture.js';
 export type { CaptureFractionInput, FaridHranilovicCapture, TopHatCaptureInput, FieldOfViewInput, FieldOfViewCheck } from './capture/capture.js';
 
-// Pointing, jitter and building sway (DOMAIN §4)
+// Pointing, jitter and building sway (METHODS.md §4)
 export { pointingOutageProbability, rayleighThresholdOverSigma, requiredThresholdOverSigma, meanPointingRelativePower, meanPointingLossDb, pointingLossDb, angularPointingLossDb, offsetForPointingLossM, pointingJitterBudget, pointingLossAtOutageDb, faridHranilovicPointingStatistics, faridHranilovicOutageProbability, combineJitterPerAxis } from './pointing/pointing.js';
 export type { PointingOutageInput, PointingJitterBudgetInput, PointingJitterBudget, FaridHranilovicPointingStatistics } from './pointing/pointing.js';
 export { buildingFundamentalFrequencyHz, buildingTiltEstimates } from './pointing/building-sway.js';
 export type { BuildingTiltInput, BuildingTiltEstimates } from './pointing/building-sway.js';
 
-// Atmospheric attenuation (DOMAIN §5)
+// Atmospheric attenuation (METHODS.md §5)
 export { KOSCHMIEDER_CONSTANT_2_PERCENT, VISIBILITY_REFERENCE_WAVELENGTH_M, VISIBILITY_2_PERCENT_PER_MOR, koschmiederConstant, toContrast2PercentVisibilityM, kimExponent, kruseExponent, visibilityExponent, visibilityExtinctionPerKm, visibilityExtinctionPerKmFast, visibilityAttenuationDbPerKm, visibilityForAttenuationM, visibility2PercentForAttenuationKm } from './atmosphere/visibility-attenuation.js';
 export type { VisibilityModel, VisibilityAttenuationInput, VisibilityForAttenuationInput } from './atmosphere/visibility-attenuation.js';
 export { alNaboulsiFogExtinctionPerKm, alNaboulsiFogAttenuationDbPerKm, rainAttenuationDbPerKm, snowAttenuationDbPerKm, clearAirAbsorptionDbPerKm, atmosphericPathLoss } from './atmosphere/fog-and-precipitation.js';
@@ -73,7 +73,7 @@ export type { FogType, AlNaboulsiFogInput, RainModel, SnowType, AtmosphericPathL
 export { VISIBILITY_CODE, visibilityCodeClass } from './atmosphere/visibility-code.js';
 export type { VisibilityCodeClass } from './atmosphere/visibility-code.js';
 
-// Turbulence (DOMAIN §6)
+// Turbulence (METHODS.md §6)
 export { wavenumberRadPerM, rytovVariance, rytovVarianceFast, fresnelZoneM, coherenceRadiusM, friedParameterM, turbulenceRegime } from './turbulence/rytov.js';
 export type { WaveModel, RytovVarianceInput, CoherenceInput, TurbulenceRegime } from './turbulence/rytov.js';
 export { normalisedApertureSquared, gammaGammaParameters, scintillationIndexAllRegimes, apertureAveragedScintillationIndex, weakApertureAveraging, weakApertureAveragingNumerical, apertureAveragedFadeMarginDb, apertureAveragedScintillationIndexFast } from './turbulence/scintillation.js';
@@ -84,11 +84,11 @@ export { GAUSSIAN_BEAM_RYTOV_FORM_RATIO, gaussianBeamRytovRatioIntegral, gaussia
 export { collimatedBeamWander, longTermBeamRadius } from './turbulence/beam-wander.js';
 export type { BeamWander, LongTermBeamRadius } from './turbulence/beam-wander.js';
 
-// Receiver (DOMAIN §7)
+// Receiver (METHODS.md §7)
 export { PLANCK_CONSTANT_J_S, SPEED_OF_LIGHT_M_PER_S, ELEMENTARY_CHARGE_C, qFactorForBer, berForQFactor, qFactorDb, photonEnergyJ, photonsPerBit, idealResponsivityAPerW, receiverSensitivity, checkReceivedPower } from './receiver/sensitivity.js';
 export type { ReceiverSensitivityInput, ReceiverSensitivity, ReceivedPowerVerdict } from './receiver/sensitivity.js';
 
-// Eye safety (DOMAIN §11): indicative only, always shown with its caution
+// Eye safety (METHODS.md §8): indicative only, always shown with its caution
 export { DEFAULT_LASER_SAFETY_EDITION, normaliseLaserSafetyEdition, eyeSafetyCaution, correctionFactorC4, correctionFactorC7, ocularMpeDetails, ocularMpeWPerM2, ocularMpeRadiantExposureJPerM2, limitingApertureDiameterM, mpePowerThroughLimitingApertureW, CLASS_3B_CW_LIMIT_W, classOneAel, classOneAelW } from './safety/exposure-limits.js';
 export type { LaserSafetyEdition, LaserSafetyEditionInput, OcularMpeInput, OcularMpeDetails, ClassOneAel } from './safety/exposure-limits.js';
 export { BINOCULAR_7X50_GAIN, viewingOpticsGain, nohdM, nohdFarFieldM, exitPeakIrradianceWPerM2 } from './safety/hazard-distance.js';
@@ -96,7 +96,7 @@ export type { NohdInput } from './safety/hazard-distance.js';
 export { accessiblePowerW, measurementConditions, indicativeLaserClass, assessEyeSafety } from './safety/classification.js';
 export type { BeamGrowthModel, AccessiblePowerInput, MeasurementCondition, IndicativeLaserClass, LaserClassInput, LaserClassIndication, EyeSafetyInput, EyeSafetyAssessment } from './safety/classification.js';
 
-// Site geometry (DOMAIN §12)
+// Site geometry (METHODS.md §9)
 export { linkGeometry, earthCurvature, surveyingCurvatureRefractionDropM, earthBulgeM, fresnelRadiusM, lineOfSightClearance } from './geometry/link-geometry.js';
 export type { Site, LinkGeometryInput, LinkGeometry, EarthCurvature, PathObstacle, ClearanceBeam, LineOfSightClearanceInput, ObstacleClearance, LineOfSightClearance } from './geometry/link-geometry.js';
 export { normaliseAzimuthDeg, geodesicInverse, geodeticToEcef, enuVector, formatDegreesMinutesSeconds, parseDegreesMinutesSeconds } from './geometry/geodesy.js';
@@ -111,7 +111,7 @@ export { integrate } from './numeric/quadrature.js';
 export type { QuadratureOptions } from './numeric/quadrature.js';
 export { besselI0Scaled } from './numeric/bessel.js';
 
-// Link budget (DOMAIN §8–§10)
+// Link budget and availability (METHODS.md §10–§11)
 export { evaluateLink, linkMarginAtRangeDb } from './budget/evaluate-link.js';
 export { maxRange, maxRangeM, MAX_RANGE_SEARCH_M } from './budget/max-range.js';
 export type { MaxRangeResult } from './budget/max-range.js';

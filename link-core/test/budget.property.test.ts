@@ -140,7 +140,7 @@ describe('link budget properties', () => {
   });
 
   it('the margin does not increase with range (gamma-gamma fade margin on, rooftop conditions)', () => {
-    // Cn² up to 1e-13, ranges of practice (DOMAIN §6.1) and p = 1e-3. Not a property everywhere: at
+    // Cn² up to 1e-13, ranges of practice (METHODS.md §6.1) and p = 1e-3. Not a property everywhere: at
     // p = 1e-6 in strong turbulence the fade margin shrinks past the scintillation peak and the
     // margin can rise by a few hundredths of a dB with range (see maxRange).
     const rooftop = fc.record({

@@ -1,7 +1,7 @@
 import type { LinkDesignInput } from '@beamwright/link-core';
 
 /**
- * The worked example LB-01 of the project's domain notes (DOMAIN.md §8): 20 dBm at 1550 nm,
+ * The worked example LB-01 of link-core/METHODS.md §10.1: 20 dBm at 1550 nm,
  * W0 = 25 mm, θ = 1 mrad half-angle (1/e²), L = 2 km, D_rx = 0.1 m, 1 + 1.5 dB optics,
  * V = 5 km (Kim), Cn² = 5e-14, 50 µrad jitter and 100 µrad bias, p = 1e-3, S = −36 dBm.
  * Its published-in-the-notes margin is 12.33 dB.

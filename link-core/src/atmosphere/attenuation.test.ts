@@ -11,18 +11,18 @@ import {
 } from './visibility-attenuation.js';
 
 describe('visibility attenuation', () => {
-  it('reproduces the Kim values tabulated in DOMAIN §5.2 (Kim, McArthur & Korevaar, Proc. SPIE 4214, 2001; K = 3.91)', () => {
+  it('reproduces the Kim values of METHODS.md §5.2 (Kim, McArthur & Korevaar, Proc. SPIE 4214, 2001; K = 3.91)', () => {
     // Table values are printed to 4 significant figures.
     expect(visibilityAttenuationDbPerKm({ model: 'kim', visibilityM: 2000, wavelengthM: 850e-9 })).toBeCloseTo(6.37, 2);
     expect(visibilityAttenuationDbPerKm({ model: 'kim', visibilityM: 1000, wavelengthM: 1550e-9 })).toBeCloseTo(10.12, 2);
     expect(visibilityAttenuationDbPerKm({ model: 'kim', visibilityM: 200, wavelengthM: 1550e-9 })).toBeCloseTo(84.9, 1);
   });
 
-  it('converts MOR (5 %) to the 2 % visibility before both K/V and q(V) (DOMAIN §5.1, Koschmieder 1924)', () => {
+  it('converts MOR (5 %) to the 2 % visibility before both K/V and q(V) (METHODS.md §5.1, Koschmieder 1924)', () => {
     const fromMor = visibilityAttenuationDbPerKm({ model: 'kim', visibilityM: 1000, wavelengthM: 1550e-9, visibilityDefinition: 'mor-5-percent' });
     const direct = visibilityAttenuationDbPerKm({ model: 'kim', visibilityM: 1000 * VISIBILITY_2_PERCENT_PER_MOR, wavelengthM: 1550e-9 });
     expect(fromMor).toBe(direct);
-    // Feeding MOR straight into the 2 % formula overstates the loss (1.31–1.65× at 1550 nm, DOMAIN §13.1).
+    // Feeding MOR straight into the 2 % formula overstates the loss (1.31–1.65× at 1550 nm, METHODS.md §5.1).
     const naive = visibilityAttenuationDbPerKm({ model: 'kim', visibilityM: 1000, wavelengthM: 1550e-9 });
     expect(naive / fromMor).toBeGreaterThan(1.3);
     expect(naive / fromMor).toBeLessThan(1.66);
@@ -76,14 +76,14 @@ describe('visibility attenuation', () => {
 });
 
 describe('fog type, rain, snow and path loss', () => {
-  it('Al Naboulsi at 1550 nm and V = 1 km lies well above Kim (DOMAIN §5.4: 19.10 against 10.12 dB/km)', () => {
+  it('Al Naboulsi at 1550 nm and V = 1 km lies well above Kim (METHODS.md §5.4: 19.10 against 10.12 dB/km)', () => {
     const advection = alNaboulsiFogAttenuationDbPerKm({ fogType: 'advection', visibilityM: 1000, wavelengthM: 1550e-9 });
     expect(advection).toBeGreaterThan(17);
     const radiation = alNaboulsiFogAttenuationDbPerKm({ fogType: 'radiation', visibilityM: 1000, wavelengthM: 1550e-9 });
     expect(radiation).toBeCloseTo(19.1, 1);
   });
 
-  it('rain: 25 mm/h gives 9.30 dB/km and 100 mm/h 23.5 dB/km (Carbonneau & Wisely 1998 as quoted in DOMAIN §5.5)', () => {
+  it('rain: 25 mm/h gives 9.30 dB/km and 100 mm/h 23.5 dB/km (Carbonneau & Wisely 1998 as widely quoted, METHODS.md §5.5)', () => {
     expect(rainAttenuationDbPerKm(25)).toBeCloseTo(9.3, 2);
     expect(rainAttenuationDbPerKm(100)).toBeCloseTo(23.54, 2);
     expect(rainAttenuationDbPerKm(25, 'geometric-upper')).toBeGreaterThan(rainAttenuationDbPerKm(25));

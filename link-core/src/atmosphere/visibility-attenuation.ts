@@ -51,9 +51,9 @@ export function koschmiederConstant(contrastThreshold: number): number {
  *
  * @param visibilityM visibility [m], > 0
  * @param definition how `visibilityM` is defined (default `contrast-2-percent`: returned unchanged)
- * @returns the 2 % visibility [m]: V2 = 1.306·MOR for `mor-5-percent`
+ * @returns the 2 % visibility [m]: V2 = (ln 50/ln 20)·MOR = 1.30587·MOR for `mor-5-percent`
  * @see Koschmieder (1924); WMO-No. 8 (MOR, 5 %). Converting first and using V2 in both K/V and q(V)
- *   is the consistent choice (DOMAIN brief §5.1, derived).
+ *   is the consistent choice (METHODS.md §5.1, derived).
  */
 export function toContrast2PercentVisibilityM(visibilityM: number, definition: VisibilityDefinition = 'contrast-2-percent'): number {
   return definition === 'mor-5-percent' ? visibilityM * VISIBILITY_2_PERCENT_PER_MOR : visibilityM;

@@ -75,7 +75,7 @@ describe('Gaussian intensity profile', () => {
 });
 
 describe('launch: Andrews & Phillips parameters and the defocused terminal', () => {
-  it('collimated W(L) equals w(z) of the waist formula (DOMAIN §1.3)', () => {
+  it('collimated W(L) equals w(z) of the waist formula (METHODS.md §1.4, Andrews & Phillips 2005 ch. 4)', () => {
     const parameters = andrewsPhillipsBeamParameters({ wavelengthM, apertureBeamRadiusM: 0.025, phaseFrontRadiusM: Infinity, rangeM: 1000 });
     expect(parameters.beamRadiusM).toBeCloseTo(beamRadiusFromWaistM(0.025, rayleighRangeM(wavelengthM, 0.025), 1000), 14);
   });

@@ -1,5 +1,5 @@
 /**
- * Availability of a link over the weather (DOMAIN §10): from a visibility climatology (a cumulative
+ * Availability of a link over the weather (METHODS.md §11): from a visibility climatology (a cumulative
  * distribution P(V < v)) or from time-stamped visibility records. Following Kim & Korevaar (2001),
  * the link fails when the visibility attenuation exceeds the clear-air margin; scintillation is left
  * out because dense fog and strong turbulence rarely coincide.
@@ -25,7 +25,7 @@ export interface AvailabilityOptions {
  *
  * @param design the link design
  * @returns M0 [dB]
- * @see DOMAIN §10 step 1; Kim I.I., Korevaar E., "Availability of free space optics (FSO) and
+ * @see METHODS.md §11.1; Kim I.I., Korevaar E., "Availability of free space optics (FSO) and
  *   hybrid FSO/RF systems", Proc. SPIE 4530, 84–95 (2001).
  */
 export function clearAirMarginDb(design: LinkDesignInput): number {
@@ -107,7 +107,7 @@ function climatologyProbabilityBelow(climatology: VisibilityClimatology, visibil
 }
 
 /**
- * Availability from a visibility climatology (DOMAIN §10): V_min solves γ(V_min) = (M0 − M_req)/L_km
+ * Availability from a visibility climatology (METHODS.md §11.2): V_min solves γ(V_min) = (M0 − M_req)/L_km
  * (bisection on log V), and the unavailability is P(V < V_min) from the site's distribution.
  *
  * @param design the link design (its range, terminals and attenuation model; its own visibility is not used)
@@ -195,7 +195,7 @@ export interface RecordsAvailability {
  * @param options required margin [dB] (default 0), record interval [h] (default 1), longest gap [h] (default 3)
  * @returns counts, hours up and down, availability in [0, 1], outages and the worst margin
  * @throws RangeError for non-increasing timestamps or mismatched lengths
- * @see Kim I.I., Korevaar E., Proc. SPIE 4530, 84–95 (2001) (method); DOMAIN §10.
+ * @see Kim I.I., Korevaar E., Proc. SPIE 4530, 84–95 (2001) (method); METHODS.md §11.3.
  */
 export function availabilityFromRecords(design: LinkDesignInput, records: VisibilityRecords, options: RecordsAvailabilityOptions = {}): RecordsAvailability {
   const resolved = resolveDesign(design);

@@ -7,7 +7,7 @@ import { evaluateLink, linkMarginAtRangeDb } from './evaluate-link.js';
 import { maxRange, maxRangeM } from './max-range.js';
 import { beamEnvelope, marginVsRange, marginVsVisibility } from './samplers.js';
 
-// LB-01 of the reference set (DOMAIN §8); the full check against the published chain is in
+// LB-01 of the reference set (METHODS.md §10.1); the full check against the published chain is in
 // test/reference.test.ts. Here: structure, defaults and consistency between the routines.
 const lb01: LinkDesignInput = {
   rangeM: 2000,
@@ -27,7 +27,7 @@ function variant(change: (design: LinkDesignInput) => void): LinkDesignInput {
 describe('evaluateLink', () => {
   const budget = evaluateLink(lb01);
 
-  it('gives the LB-01 margin (12.33 dB, DOMAIN §8)', () => {
+  it('gives the LB-01 margin (12.33 dB, METHODS.md §10.1)', () => {
     expect(budget.linkMarginDb).toBeCloseTo(12.3323, 4);
     expect(budget.receivedPowerDbm).toBeCloseTo(-13.8523, 4);
   });
@@ -91,7 +91,7 @@ describe('evaluateLink', () => {
     expect(off.linkMarginDb).toBeCloseTo(budget.linkMarginDb + budget.scintillationFadeMarginDb, 12);
   });
 
-  it('converts a MOR visibility to the 2 % visibility before the model (DOMAIN §5.1)', () => {
+  it('converts a MOR visibility to the 2 % visibility before the model (METHODS.md §5.1)', () => {
     const mor = evaluateLink(variant((design) => (design.atmosphere = { ...design.atmosphere, visibilityM: 5000 / 1.305865361, visibilityDefinition: 'mor-5-percent' })));
     expect(mor.atmosphericLossDb).toBeCloseTo(budget.atmosphericLossDb, 6);
     expect(mor.checks.map((check) => check.key)).toContain('visibility-converted-from-mor');
@@ -147,9 +147,9 @@ describe('evaluateLink', () => {
     expect(wide.checks.map((check) => check.key)).not.toContain('field-of-view-below-turbulence-blur');
   });
 
-  it('budgets the loss at the outage radius for an outage-based design (DOMAIN §4.2)', () => {
+  it('budgets the loss at the outage radius for an outage-based design (METHODS.md §4.2)', () => {
     const outage = evaluateLink(variant((design) => (design.pointing.outageProbability = 1e-3)));
-    // bias/jitter = 100/50 µrad = 2 and p = 1e-3 give r_p = 5.241σ (DOMAIN §4.2, PT-04 example)
+    // bias/jitter = 100/50 µrad = 2 and p = 1e-3 give r_p = 5.241σ (METHODS.md §4.2, PT-04 example)
     const radiusM = 5.241 * 50e-6 * 2000;
     expect(outage.pointingLossModel).toBe('outage');
     expect(outage.pointingLossDb).toBeCloseTo(8.686 * (radiusM / outage.beamRadiusAtReceiverM) ** 2, 3);

@@ -1,6 +1,6 @@
 /**
- * The link budget of DOMAIN §8 as an ordered list of terms, and the maximum range for a required
- * margin (DOMAIN §9).
+ * The link budget of METHODS.md §10.1 as an ordered list of terms, and the maximum range for a required
+ * margin (METHODS.md §10.4).
  */
 import { coherenceRadiusM } from '../turbulence/rytov.js';
 import type { BudgetCheck, BudgetTerm, BudgetTermKey, LinkBudget } from '../schemas/link-budget.schema.js';
@@ -77,7 +77,7 @@ function collectChecks(design: ResolvedDesign, receivedPowerDbm: number, diffrac
     });
   }
   if (design.fieldOfViewRad !== undefined && design.cn2 > 0) {
-    // Turbulence blur of the focused spot ≈ λ/ρ0 (DOMAIN §6.3); the field of view should exceed it.
+    // Turbulence blur of the focused spot ≈ λ/ρ0 (METHODS.md §6.4); the field of view should exceed it.
     const rho0 = coherenceRadiusM({ cn2: design.cn2, wavelengthM: design.wavelengthM, distanceM: design.rangeM, wave: 'spherical' });
     const blurRad = design.wavelengthM / rho0;
     if (blurRad > design.fieldOfViewRad) {
@@ -132,7 +132,7 @@ function invalidDesignError(design: unknown): RangeError {
 }
 
 /**
- * Link budget and margin of a design (DOMAIN §8):
+ * Link budget and margin of a design (METHODS.md §10.1):
  * P_rx = P_tx − L_tx − L_geo − γ·L − L_point − L_rx [dBm]; M = P_rx − S − F_scint − M_system [dB].
  *
  * Accepts a validated design or a raw one with only the required fields: the defaults of

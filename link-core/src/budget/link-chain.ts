@@ -1,5 +1,5 @@
 /**
- * The arithmetic of the link budget (DOMAIN §8), allocation-light and without validation, shared by
+ * The arithmetic of the link budget (METHODS.md §10.1), allocation-light and without validation, shared by
  * evaluateLink, maxRangeM, the availability routines and the chart samplers. A design is first
  * resolved into plain numbers (defaults applied with `??`, no zod parse), then the chain is
  * evaluated for any range and specific attenuation.
@@ -59,7 +59,7 @@ export interface ResolvedDesign {
 /**
  * Angular pointing error exceeded with probability p by a Rician error with bias θb and per-axis
  * jitter σθ: r_p/σ from Q1(θb/σθ, r_p/σ) = p, times σθ; the bias itself when there is no jitter.
- * @see Marcum J.I. (1960); DOMAIN §4.2 (pointing margin for a target outage).
+ * @see Marcum J.I. (1960); METHODS.md §4.2 (pointing margin for a target outage).
  */
 function outageAngleRad(jitterSigmaPerAxisRad: number, staticErrorRad: number, outageProbability: number): number {
   if (jitterSigmaPerAxisRad === 0) return staticErrorRad;
@@ -251,7 +251,7 @@ const scratch: ChainResult = {
  * @param attenuationDbPerKm specific atmospheric attenuation γ [dB/km], ≥ 0
  * @param includeScintillation whether to subtract the fade margin
  * @returns the chain's numbers, in a shared object that the next call overwrites (copy what you keep)
- * @see DOMAIN §8; the sources of each term are in budget-terms.ts.
+ * @see METHODS.md §10.1; the sources of each term are in budget-terms.ts.
  */
 export function evaluateChain(design: ResolvedDesign, rangeM: number, attenuationDbPerKm: number, includeScintillation: boolean): ChainResult {
   const beamRadiusM = launchBeamRadiusAtRangeM(design.wavelengthM, design.apertureBeamRadiusM, design.halfAngleDivergenceRad, design.m2, rangeM);
@@ -263,7 +263,7 @@ export function evaluateChain(design: ResolvedDesign, rangeM: number, attenuatio
   if (Number.isNaN(design.pointingOutageAngleRad)) {
     pointingLossDb = meanPointingLossDb(beamRadiusM, design.jitterSigmaPerAxisRad * rangeM, design.staticErrorRad * rangeM);
   } else {
-    // Loss of a small receiver at the outage radius: −10·log10(exp(−2r²/W²)) = 8.686·(r/W)² (DOMAIN §4.2).
+    // Loss of a small receiver at the outage radius: −10·log10(exp(−2r²/W²)) = 8.686·(r/W)² (METHODS.md §4.3).
     const ratio = (design.pointingOutageAngleRad * rangeM) / beamRadiusM;
     pointingLossDb = 2 * DB_PER_NEPER_POWER * ratio * ratio;
   }
@@ -273,7 +273,7 @@ export function evaluateChain(design: ResolvedDesign, rangeM: number, attenuatio
   let scintillationIndex = 0;
   let scintillationFadeMarginDb = 0;
   if (includeScintillation && design.cn2 > 0) {
-    // Spherical wave, aperture averaged, gamma-gamma at p (DOMAIN §6.2, §6.5, §6.7): divergent FSO
+    // Spherical wave, aperture averaged, gamma-gamma at p (METHODS.md §6.2, §6.6, §6.9): divergent FSO
     // beams have Θ ≈ 0 at the receiver and behave as spherical waves.
     rytovVarianceSpherical = rytovVarianceFast(design.cn2, design.wavelengthM, rangeM, true);
     scintillationIndex = apertureAveragedScintillationIndexFast(design.wavelengthM, rangeM, design.cn2, design.apertureDiameterM);

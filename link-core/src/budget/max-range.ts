@@ -1,11 +1,11 @@
 /**
- * Maximum range for a required margin (DOMAIN §9): the root of M(L) = M_req on [50 m, 50 km].
+ * Maximum range for a required margin (METHODS.md §10.4): the root of M(L) = M_req on [50 m, 50 km].
  */
 import { findRootBrent } from '../numeric/root-finding.js';
 import type { LinkDesignInput } from '../schemas/link-design.schema.js';
 import { evaluateChain, resolveDesign, specificAttenuationDbPerKm } from './link-chain.js';
 
-/** Search interval of the maximum range [m] (DOMAIN §9). */
+/** Search interval of the maximum range [m] (METHODS.md §10.4). */
 export const MAX_RANGE_SEARCH_M = { lower: 50, upper: 50_000 } as const;
 
 /** Outcome of {@link maxRange}. */
@@ -28,7 +28,7 @@ const SCAN_POINTS = 64;
  * Longest path length at which the design still has the required margin, with the reason when
  * there is none. Everything but the range is taken from the design (visibility, Cn², probability…).
  *
- * M(L) usually falls monotonically (DOMAIN §9), but not always: with a central obscuration, while
+ * M(L) usually falls monotonically (METHODS.md §10.4), but not always: with a central obscuration, while
  * the beam is narrower than the obscuration, widening it *raises* the captured power; and with
  * strong turbulence and a very small fade probability (e.g. Cn² = 1e-13, p = 1e-6) the fade margin
  * shrinks as the scintillation index passes its peak towards saturation, faster than the other
@@ -41,7 +41,7 @@ const SCAN_POINTS = 64;
  * @param requiredMarginDb required link margin [dB], finite (may be negative)
  * @returns status, range [m] in [50, 50 000] or null, and the margin there [dB] (for
  *   `not-achievable`: the best margin found on the scan)
- * @see DOMAIN §9; Brent R.P., "Algorithms for Minimization without Derivatives" (1973), ch. 4.
+ * @see METHODS.md §10.4; Brent R.P., "Algorithms for Minimization without Derivatives" (1973), ch. 4.
  */
 export function maxRange(design: LinkDesignInput, requiredMarginDb: number): MaxRangeResult {
   if (!Number.isFinite(requiredMarginDb)) throw new RangeError(`requiredMarginDb: must be a finite number (got ${String(requiredMarginDb)})`);
@@ -77,7 +77,7 @@ export function maxRange(design: LinkDesignInput, requiredMarginDb: number): Max
  * @param design the link design (its own rangeM is ignored)
  * @param requiredMarginDb required link margin [dB]
  * @returns range [m] in [50, 50 000], or null when not achievable
- * @see DOMAIN §9; {@link maxRange}.
+ * @see METHODS.md §10.4; {@link maxRange}.
  */
 export function maxRangeM(design: LinkDesignInput, requiredMarginDb: number): number | null {
   return maxRange(design, requiredMarginDb).rangeM;

@@ -40,7 +40,7 @@ function checkInterval(fromM: number, toM: number): void {
  * @param design the link design
  * @param options range interval [m] and number of samples
  * @returns ranges [m], margins [dB], received powers [dBm], beam radii [m]
- * @see evaluateLink (DOMAIN §8); the curve is monotone for these models (DOMAIN §9).
+ * @see evaluateLink (METHODS.md §10.1); the curve is usually monotone (METHODS.md §10.4).
  */
 export function marginVsRange(design: LinkDesignInput, options: RangeSweepOptions = {}): RangeSweep {
   const resolved = resolveDesign(design);
@@ -86,7 +86,7 @@ export interface VisibilitySweep {
  * @param design the link design
  * @param options visibility interval [m] and number of samples
  * @returns visibilities [m], atmospheric losses [dB], margins [dB]
- * @see Kim, McArthur & Korevaar, Proc. SPIE 4214 (2001); DOMAIN §5 and §8.
+ * @see Kim, McArthur & Korevaar, Proc. SPIE 4214 (2001); METHODS.md §5 and §10.5.
  */
 export function marginVsVisibility(design: LinkDesignInput, options: VisibilitySweepOptions = {}): VisibilitySweep {
   const resolved = resolveDesign(design);
@@ -152,7 +152,7 @@ export interface BeamEnvelope {
  * @param options number of samples
  * @returns distances [m], beam radii [m], aperture radii [m], waist position/radius [m], Rayleigh range [m]
  * @see Kogelnik H., Li T., Appl. Opt. 5(10), 1550–1567 (1966) (q parameter); Andrews & Phillips
- *   (2005), ch. 4 (defocused launch, DOMAIN §1.3).
+ *   (2005), ch. 4 (defocused launch, METHODS.md §1.5).
  */
 export function beamEnvelope(design: LinkDesignInput, options: BeamEnvelopeOptions = {}): BeamEnvelope {
   const resolved = resolveDesign(design);

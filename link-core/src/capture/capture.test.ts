@@ -11,7 +11,7 @@ import {
 import { integrate } from '../numeric/quadrature.js';
 import { besselI0Scaled } from '../numeric/bessel.js';
 
-// Independent path: the Bessel-I0 radial integral written with the scaled Bessel function (DOMAIN §3.2, option 1).
+// Independent path: the Bessel-I0 radial integral written with the scaled Bessel function (METHODS.md §3.2).
 function captureByQuadrature(w: number, a: number, r0: number): number {
   return integrate((r) => ((4 * r) / (w * w)) * Math.exp((-2 * (r - r0) ** 2) / (w * w)) * besselI0Scaled((4 * r * r0) / (w * w)), 0, a, {
     absoluteTolerance: 1e-300,
@@ -78,7 +78,7 @@ describe('offsetForRelativeCapture', () => {
 });
 
 describe('top-hat ratio and field of view', () => {
-  it('top-hat is ~3 dB below centred Gaussian capture for a ≪ w (DOMAIN §3.4)', () => {
+  it('top-hat is ~3 dB below centred Gaussian capture for a ≪ w (METHODS.md §3.4)', () => {
     const topHat = topHatCaptureRatio({ transmitBeamDiameterM: 0.05, fullAngleDivergenceRad: 2e-3, rangeM: 2000, receiveApertureDiameterM: 0.1 });
     const gaussian = captureFraction({ beamRadiusM: 0.025 + 1e-3 * 2000, apertureRadiusM: 0.05 });
     expect(10 * Math.log10(gaussian / topHat)).toBeCloseTo(10 * Math.log10(2), 2);

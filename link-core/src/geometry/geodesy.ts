@@ -21,7 +21,7 @@ export interface GeodesicInverse {
  * Normalises an angle in degrees to [0, 360) (azimuths: true, clockwise from north).
  * @param angleDeg any finite angle [deg]
  * @returns the same direction in [0, 360) [deg]
- * @see common practice (azimuth convention of DOMAIN §0).
+ * @see common practice (azimuth convention of METHODS.md §0).
  */
 export function normaliseAzimuthDeg(angleDeg: number): number {
   const wrapped = angleDeg % 360;

@@ -226,7 +226,7 @@ export interface EyeSafetyAssessment {
  * @param input power [W] > 0, wavelength [m] (700–1400 or 1500–1800 nm), W0 [m] > 0, θ [rad] ≥ 0,
  *   optional exposure [s], edition and optical gain
  * @returns the assessment (see {@link EyeSafetyAssessment}); indicative, never a certification
- * @see IEC 60825-1:2007/2014; ANSI Z136.1; DOMAIN §11 [limits from memory].
+ * @see IEC 60825-1:2007/2014; ANSI Z136.1; METHODS.md §8 [limits from memory].
  */
 export function assessEyeSafety(input: EyeSafetyInput): EyeSafetyAssessment {
   const edition = normaliseLaserSafetyEdition(input.edition);

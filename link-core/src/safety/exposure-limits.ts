@@ -12,7 +12,7 @@ import { requirePositive } from '../atmosphere/input-guards.js';
 /** Editions of IEC 60825-1 whose limits differ in 1200–1400 nm. */
 export type LaserSafetyEdition = 'IEC 60825-1:2007' | 'IEC 60825-1:2014';
 
-/** Edition used when the caller names none: the conservative 2007 limits (DOMAIN §11.3). */
+/** Edition used when the caller names none: the conservative 2007 limits (METHODS.md §8.4). */
 export const DEFAULT_LASER_SAFETY_EDITION: LaserSafetyEdition = 'IEC 60825-1:2007';
 
 /** Accepted spellings of an edition: the full name, the year as text or as a number. */

@@ -10,7 +10,7 @@ describe('ocular MPE (IEC 60825-1 Table A.1 / ANSI Z136.1 Table 5a, from memory)
     expect(ocularMpeWPerM2({ wavelengthM: 1550e-9, exposureS: 100 })).toBe(1000);
   });
 
-  it('1310 nm: conservative 2007 value by default, higher 2014 value capped by the corneal guide (DOMAIN §11.3)', () => {
+  it('1310 nm: conservative 2007 value by default, higher 2014 value capped by the corneal guide (METHODS.md §8.4)', () => {
     expect(ocularMpeWPerM2({ wavelengthM: 1310e-9, exposureS: 100 })).toBeCloseTo(400, 9);
     expect(ocularMpeWPerM2({ wavelengthM: 1310e-9, exposureS: 100, edition: 2014 })).toBeCloseTo(10000, 9);
     expect(ocularMpeDetails({ wavelengthM: 1310e-9, exposureS: 100, edition: 'IEC 60825-1:2014' }).retinalMpeWPerM2).toBeCloseTo(12959.43, 1);
@@ -31,7 +31,7 @@ describe('ocular MPE (IEC 60825-1 Table A.1 / ANSI Z136.1 Table 5a, from memory)
   });
 });
 
-describe('NOHD (DOMAIN §11.4)', () => {
+describe('NOHD (METHODS.md §8.6)', () => {
   const beam = { powerW: 1, mpeWPerM2: 1000, wavelengthM: 1550e-9, waistRadiusM: 0.01 };
 
   it('the far-field form underestimates near-diffraction-limited beams: 305 m against 432 m at θ = 50 µrad', () => {

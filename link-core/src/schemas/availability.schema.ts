@@ -1,5 +1,5 @@
 /**
- * Inputs of the availability routines (DOMAIN §10) for callers that receive them from users or over
+ * Inputs of the availability routines (METHODS.md §11) for callers that receive them from users or over
  * the wire: a visibility climatology table, and time-stamped visibility records.
  */
 import { z } from 'zod';

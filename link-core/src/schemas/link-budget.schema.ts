@@ -1,5 +1,5 @@
 /**
- * The result of evaluateLink: the budget of DOMAIN §8 as an ordered list of terms plus the named
+ * The result of evaluateLink: the budget of METHODS.md §10.1 as an ordered list of terms plus the named
  * quantities an engineer reads off it. Results are produced by link-core, so this schema is for
  * consumers that receive a budget over the wire (the API response, stored revisions) and for
  * documentation; the hot path never parses it.

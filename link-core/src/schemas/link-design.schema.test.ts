@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { formatZodIssues } from './format-zod-issues.js';
 import { FADE_PROBABILITY_MESSAGE, LINK_DESIGN_DEFAULTS, LinkDesignSchema, POINTING_OUTAGE_PROBABILITY_MESSAGE, PROBABILITY_BOUNDS, type LinkDesignInput } from './link-design.schema.js';
 
-// The worked example LB-01 of the reference set (DOMAIN §8): a 2 km 1550 nm link.
+// The worked example LB-01 of the reference set (METHODS.md §10.1): a 2 km 1550 nm link.
 const lb01: LinkDesignInput = {
   rangeM: 2000,
   transmitter: { wavelengthM: 1.55e-6, powerDbm: 20, waistRadiusM: 0.025, halfAngleDivergenceRad: 1e-3, opticsLossDb: 1 },

@@ -1,5 +1,5 @@
 /**
- * The link design: everything the budget of DOMAIN §8 needs, in SI units (metres, radians), with
+ * The link design: everything the budget of METHODS.md §10.1 needs, in SI units (metres, radians), with
  * powers in dBm and losses in dB named as such. The UI's form, the API's validation pipe and the
  * stored revisions all use this one schema.
  *
@@ -15,15 +15,15 @@ export const LINK_DESIGN_DEFAULTS = {
   m2: 1,
   /** central obscuration of the receive aperture as a diameter ratio; 0 = unobscured */
   obscurationRatio: 0,
-  /** Kim et al. 2001 is the preferred visibility model (DOMAIN §5.2, §13.3) */
+  /** Kim et al. 2001 is the preferred visibility model (METHODS.md §5.2–5.3) */
   atmosphereModel: 'kim',
-  /** Kim and Kruse are defined on the 2 % contrast visibility (DOMAIN §5.1) */
+  /** Kim and Kruse are defined on the 2 % contrast visibility (METHODS.md §5.1) */
   visibilityDefinition: 'contrast-2-percent',
   /** the scintillation fade margin is part of the budget unless switched off */
   scintillationInclude: true,
-  /** fade probability 1e-3: DOMAIN §6.7 [practice] */
+  /** fade probability 1e-3: METHODS.md §6.9 [common practice] */
   scintillationProbability: 1e-3,
-  /** no ageing/dirt allowance unless the engineer sets one (DOMAIN §7 suggests 1–3 dB) */
+  /** no ageing/dirt allowance unless the engineer sets one (1–3 dB is common practice, METHODS.md §10.1) */
   systemMarginDb: 0,
 } as const;
 
@@ -52,8 +52,8 @@ export const POINTING_OUTAGE_PROBABILITY_MESSAGE = probabilityMessage(PROBABILIT
 
 /**
  * Visibility-to-attenuation models available to the budget: Kim (default) and Kruse for haze and
- * fog (DOMAIN §5.2–5.3), and Al Naboulsi's fog models by fog type, stated for 50 m–1 km visibility
- * and 0.69–1.55 µm (DOMAIN §5.4).
+ * fog (METHODS.md §5.2–5.3), and Al Naboulsi's fog models by fog type, stated for 50 m–1 km visibility
+ * and 0.69–1.55 µm (METHODS.md §5.4).
  */
 export const ATMOSPHERE_MODELS = ['kim', 'kruse', 'al-naboulsi-advection', 'al-naboulsi-radiation'] as const;
 export type AtmosphereModel = (typeof ATMOSPHERE_MODELS)[number];
@@ -77,11 +77,11 @@ export const TransmitterSchema = section({
   wavelengthM: boundedNumber({ atLeast: 200e-9, atMost: 20e-6, unitNote: { lower: '200 nm', upper: '20 µm' } }),
   /** average optical output power [dBm] (−40 dBm = 0.1 µW … 50 dBm = 100 W) */
   powerDbm: boundedNumber({ atLeast: -40, atMost: 50, unitNote: { lower: '−40 dBm', upper: '50 dBm (100 W)' } }),
-  /** 1/e² beam radius at the transmit aperture [m] (W0 of DOMAIN §1.3) */
+  /** 1/e² beam radius at the transmit aperture [m] (W0 of METHODS.md §1.4) */
   waistRadiusM: boundedNumber({ greaterThan: 0, practicalMinimum: { value: 1e-4, text: '0.1 mm' }, atMost: 1, unitNote: { upper: '1 m' } }),
   /**
    * measured far-field half-angle divergence, 1/e² [rad]. When it exceeds the diffraction limit
-   * M²λ/(πW0) the beam is the defocused launch of DOMAIN §1.3; otherwise it is collimated.
+   * M²λ/(πW0) the beam is the defocused launch of METHODS.md §1.5; otherwise it is collimated.
    */
   halfAngleDivergenceRad: boundedNumber({ greaterThan: 0, atMost: 0.1, unitNote: { upper: '0.1 rad (100 mrad)' } }).optional(),
   /** beam propagation ratio M² ≥ 1 (ISO 11146-1) */
@@ -101,7 +101,7 @@ export const ReceiverSchema = section({
   overloadDbm: boundedNumber({ atLeast: -90, atMost: 40, unitNote: { lower: '−90 dBm', upper: '40 dBm' } }).optional(),
   /** central obscuration as a ratio of diameters, in [0, 1) */
   obscurationRatio: boundedNumber({ atLeast: 0, lessThan: 1 }).default(LINK_DESIGN_DEFAULTS.obscurationRatio),
-  /** receiver half-angle field of view [rad] (DOMAIN §3.5) */
+  /** receiver half-angle field of view [rad] (METHODS.md §3.5) */
   fieldOfViewRad: boundedNumber({ greaterThan: 0, atMost: 0.5, unitNote: { upper: '0.5 rad' } }).optional(),
 }).refine((receiver) => receiver.overloadDbm === undefined || receiver.overloadDbm > receiver.sensitivityDbm, {
   message: 'must be greater than the sensitivity',
@@ -109,12 +109,12 @@ export const ReceiverSchema = section({
 });
 
 export const PointingSchema = section({
-  /** zero-mean Gaussian jitter, standard deviation per axis [rad] (DOMAIN §4.1) */
+  /** zero-mean Gaussian jitter, standard deviation per axis [rad] (METHODS.md §4.1) */
   jitterSigmaPerAxisRad: boundedNumber({ atLeast: 0, atMost: 0.1, unitNote: { upper: '0.1 rad' } }),
   /** fixed pointing bias [rad] */
   staticErrorRad: boundedNumber({ atLeast: 0, atMost: 0.1, unitNote: { upper: '0.1 rad' } }),
   /**
-   * outage-based design (DOMAIN §4.2, §8): budget the pointing loss that is exceeded only with this
+   * outage-based design (METHODS.md §4.2, §10.1): budget the pointing loss that is exceeded only with this
    * probability (1e-9 … 0.5, PROBABILITY_BOUNDS.pointingOutage) instead of the mean loss. Absent: mean loss.
    */
   outageProbability: boundedProbability(PROBABILITY_BOUNDS.pointingOutage).optional(),
@@ -132,7 +132,7 @@ export const AtmosphereSchema = section({
 });
 
 export const ScintillationSchema = section({
-  /** subtract the gamma-gamma fade margin (spherical wave, aperture averaged, DOMAIN §6.5–6.7) */
+  /** subtract the gamma-gamma fade margin (spherical wave, aperture averaged, METHODS.md §6.6–6.9) */
   include: z.boolean({ error: 'must be true or false' }).default(LINK_DESIGN_DEFAULTS.scintillationInclude),
   /** probability that the irradiance falls below the margin's threshold, 1e-9 … 0.5 (PROBABILITY_BOUNDS.fade) */
   probability: boundedProbability(PROBABILITY_BOUNDS.fade).default(LINK_DESIGN_DEFAULTS.scintillationProbability),

@@ -44,7 +44,8 @@ export interface LongTermBeamRadius {
 
 /**
  * Long-term (time-averaged) 1/e² beam radius; both forms give W_LT ≈ W for divergent FSO beams (Λ ≈ 0).
- * The short-term radius is about sqrt(W_LT² − ⟨r_c²⟩).
+ * The long-term beam already contains the wander: counted as jitter instead (⟨r_c²⟩/2 per axis), the
+ * short-term radius would be sqrt(W_LT² − 2⟨r_c²⟩) (METHODS.md §6.10).
  *
  * @param beamRadiusM free-space radius W at the receiver [m], > 0
  * @param lambda output-plane Fresnel ratio Λ ≥ 0

@@ -11,7 +11,7 @@
  * x²·f′(x), so the quantile uses Halley's method on ln F(e^t) = ln p from a Cornish–Fisher start
  * (exact cumulants of ln I from polygamma functions): one pass for weak or aperture-averaged
  * scintillation, two or three in strong turbulence.
- * The 1F2 series (DOMAIN §6.7, method 2) is kept beside it as an independent cross-check.
+ * The 1F2 series (METHODS.md §6.9) is kept beside it as an independent cross-check.
  */
 import erfc from '@stdlib/math-base-special-erfc';
 import gamma from '@stdlib/math-base-special-gamma';
@@ -25,7 +25,7 @@ import { digamma, pentagamma, tetragamma, trigamma } from './polygamma.js';
 /**
  * Above this value of min(α, β) the gamma-gamma fade margin uses the log-normal law with the same
  * scintillation index (σ_I² < ~0.005; the difference is ≪ 0.01 dB), as the project's reference
- * computations do (DOMAIN §6.7).
+ * computations do (METHODS.md §6.9).
  */
 export const GAMMA_GAMMA_LOGNORMAL_SHAPE_LIMIT = 500;
 
@@ -177,7 +177,7 @@ export function gammaGammaPdf(x: number, alpha: number, beta: number): number {
 }
 
 /**
- * Gamma-gamma CDF by the 1F2 series (DOMAIN §6.7, method 2), written term by term:
+ * Gamma-gamma CDF by the 1F2 series (METHODS.md §6.9), written term by term:
  * F(x) = π/(sin(π(α−β))Γ(α)Γ(β)) Σ_n [ z^(n+β)/((n+β)·n!·Γ(n+β−α+1)) − z^(n+α)/((n+α)·n!·Γ(n+α−β+1)) ], z = αβx.
  * Exact but cancels badly for large z (loses about 2·sqrt(z)/ln 10 digits) and needs α − β away from
  * an integer: use it as a cross-check for small z, not in general.
@@ -377,7 +377,7 @@ export function lastGammaGammaQuantileIterations(): number {
  * @param beta β > 0
  * @param probability p in (0, 1)
  * @returns fade margin [dB] below the mean irradiance; positive for the small p of link design
- * @see Al-Habash, Andrews & Phillips (2001); DOMAIN §6.7.
+ * @see Al-Habash, Andrews & Phillips (2001); METHODS.md §6.9.
  */
 export function fadeMarginGammaGammaDb(alpha: number, beta: number, probability: number): number {
   const margin = -10 * Math.log10(gammaGammaQuantile(alpha, beta, probability));
@@ -446,7 +446,7 @@ export type FadeMarginInput =
  *   `{ model: 'lognormal', scintillationIndex ≥ 0, probability in (0, 1) }`
  * @returns fade margin [dB]: positive for p below the median, larger for smaller p
  * @see Al-Habash, Andrews & Phillips, Opt. Eng. 40(8), 1554–1562 (2001); Andrews & Phillips (2005),
- *   ch. 11–12. Show it as an estimate (±2 dB; DOMAIN §13.8).
+ *   ch. 11–12. Show it as an estimate (±2 dB; METHODS.md §6.6).
  */
 export function fadeMarginDb(input: FadeMarginInput): number {
   requireOpenUnitInterval('probability', input.probability);

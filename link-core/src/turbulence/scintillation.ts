@@ -183,7 +183,7 @@ export function weakApertureAveragingNumerical(apertureD2: number, wave: WaveMod
  * @param apertureDiameterM receive aperture diameter [m], ≥ 0
  * @param probability fade probability p in (0, 1)
  * @returns fade margin [dB] below the mean irradiance
- * @see DOMAIN §8 (F_scint from §6.7 with spherical wave and aperture averaging); Andrews & Phillips
+ * @see METHODS.md §10.1 (F_scint of §6.9, spherical wave, aperture averaged); Andrews & Phillips
  *   (2005), ch. 10; Al-Habash, Andrews & Phillips (2001).
  */
 export function apertureAveragedFadeMarginDb(wavelengthM: number, distanceM: number, cn2: number, apertureDiameterM: number, probability: number): number {

@@ -29,7 +29,7 @@ import {
 } from './scintillation.js';
 
 describe('Rytov variance and scintillation index', () => {
-  it('gives σ_R² = 0.1991 and β0² = 0.0809 at 1550 nm, Cn² = 1e-14, 1 km (DOMAIN §6.2 example, Andrews & Phillips 2005 ch. 8)', () => {
+  it('gives σ_R² = 0.1991 and β0² = 0.0809 at 1550 nm, Cn² = 1e-14, 1 km (METHODS.md §6.2 example, Andrews & Phillips 2005 ch. 8)', () => {
     const common = { cn2: 1e-14, wavelengthM: 1550e-9, distanceM: 1000 };
     expect(rytovVariance({ ...common, wave: 'plane' })).toBeCloseTo(0.1991, 4);
     expect(rytovVariance({ ...common, wave: 'spherical' })).toBeCloseTo(0.0809, 4);
@@ -56,7 +56,7 @@ describe('Rytov variance and scintillation index', () => {
     }
   });
 
-  it('aperture averaging reduces σ_I² 5–15× for D = 0.1 m at 1 km, 1550 nm (DOMAIN §6.5)', () => {
+  it('aperture averaging reduces σ_I² 5–15× for D = 0.1 m at 1 km, 1550 nm (METHODS.md §6.6, Andrews & Phillips 2005 ch. 10)', () => {
     const d2 = normalisedApertureSquared(1550e-9, 1000, 0.1);
     expect(d2).toBeCloseTo(10.134, 3);
     const point = scintillationIndexAllRegimes(0.2, 'plane');
@@ -92,7 +92,7 @@ describe('Gaussian-beam scintillation', () => {
     expect(gaussianBeamScintillationIndex(2, 0)).toBeCloseTo(scintillationIndexAllRegimes(2, 'spherical'), 12);
   });
 
-  it('beam wander: 9.1 mm rms for Cn² = 1e-14, 1 km, W0 = 25 mm (DOMAIN §6.8)', () => {
+  it('beam wander: 9.1 mm rms for Cn² = 1e-14, 1 km, W0 = 25 mm (METHODS.md §6.10, Andrews & Phillips 2005 ch. 6)', () => {
     expect(collimatedBeamWander(1e-14, 1000, 0.025).wanderRmsRadialM).toBeCloseTo(0.0091, 4);
   });
 });
@@ -142,13 +142,13 @@ describe('gamma-gamma statistics and fade margin', () => {
     expect(lastGammaGammaQuantileIterations()).toBe(1);
   });
 
-  it('the hot-path chain gives the LB-01 scintillation terms (F = 9.8154 dB, σ_I² = 0.28749; DOMAIN §8)', () => {
+  it('the hot-path chain gives the LB-01 scintillation terms (F = 9.8154 dB, σ_I² = 0.28749; METHODS.md §10.1)', () => {
     expect(apertureAveragedFadeMarginDb(1550e-9, 2000, 5e-14, 0.1, 1e-3)).toBeCloseTo(9.815440988, 6);
     expect(apertureAveragedScintillationIndexFast(1550e-9, 2000, 5e-14, 0.1)).toBeCloseTo(0.2874881169, 9);
     expect(apertureAveragedFadeMarginDb(1550e-9, 2000, 0, 0.1, 1e-3)).toBe(0);
   });
 
-  it('gamma-gamma needs more margin than log-normal at the same σ_I² in moderate turbulence (DOMAIN §13.9)', () => {
+  it('gamma-gamma needs more margin than log-normal at the same σ_I² in moderate turbulence (METHODS.md §6.9, Al-Habash et al. 2001)', () => {
     const { alpha, beta, scintillationIndex } = gammaGammaParameters({ rytovVariance: 1, wave: 'plane' });
     const gg = fadeMarginDb({ model: 'gamma-gamma', alpha, beta, probability: 1e-3 });
     const ln = fadeMarginDb({ model: 'lognormal', scintillationIndex, probability: 1e-3 });

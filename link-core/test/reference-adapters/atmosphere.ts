@@ -1,5 +1,5 @@
 /**
- * Reference adapters for DOMAIN §5 (attenuation). Each calls the engine's exported functions.
+ * Reference adapters for METHODS.md §5 (attenuation). Each calls the engine's exported functions.
  */
 import { DB_PER_NATURAL_LOG_POWER } from '../../src/units/constants.ts';
 import {

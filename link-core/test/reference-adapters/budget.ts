@@ -1,5 +1,5 @@
 /**
- * Reference adapters of the link budget (DOMAIN §8–§10): the worked example LB-01, the maximum
+ * Reference adapters of the link budget (METHODS.md §10–§11): the worked example LB-01, the maximum
  * ranges LB-02-* and the availability from a (synthetic) visibility climatology LB-03. The case
  * inputs use the key names of the reference file; they are mapped onto a LinkDesign here.
  */

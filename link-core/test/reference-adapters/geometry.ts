@@ -125,5 +125,5 @@ export const adapters: ReferenceAdapters = {
 
 export const notCovered: NotCovered = {
   'geodesic_nearly_antipodal.vincenty_converges':
-    "The engine deliberately implements no Vincenty inverse (DOMAIN §12.1: it can fail near antipodes); geodesics use Karney's algorithm only, whose result for this case is checked by the other keys.",
+    "The engine deliberately implements no Vincenty inverse (METHODS.md §9.1; Vincenty 1975 can fail near antipodes); geodesics use Karney's algorithm only, whose result for this case is checked by the other keys.",
 };

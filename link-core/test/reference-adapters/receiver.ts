@@ -1,5 +1,5 @@
 /**
- * Reference adapters for DOMAIN §7 (receiver). Each calls the engine's exported functions.
+ * Reference adapters for METHODS.md §7 (receiver). Each calls the engine's exported functions.
  */
 import {
   idealResponsivityAPerW,

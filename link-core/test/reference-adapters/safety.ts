@@ -1,5 +1,5 @@
 /**
- * Reference adapters for DOMAIN §11 (eye safety). Each calls the engine's exported functions.
+ * Reference adapters for METHODS.md §8 (eye safety). Each calls the engine's exported functions.
  */
 import { accessiblePowerW, measurementConditions } from '../../src/safety/classification.ts';
 import {

@@ -1,5 +1,5 @@
 /**
- * Reference adapters for DOMAIN §6 (turbulence). Each calls the engine's exported functions.
+ * Reference adapters for METHODS.md §6 (turbulence). Each calls the engine's exported functions.
  */
 import { andrewsPhillipsBeamParameters } from '../../src/beam/launch.ts';
 import { collimatedBeamWander, longTermBeamRadius } from '../../src/turbulence/beam-wander.ts';
@@ -132,7 +132,7 @@ export const adapters: ReferenceAdapters = {
   aperture_averaged_gamma_gamma: (inputs) => {
     const d2 = normalisedApertureSquared(inputs.wavelength_m, inputs.L_m, inputs.rx_diameter_m);
     const plane = gammaGammaParameters({ rytovVariance: inputs.rytov_plane_sigma_R2, wave: 'plane', apertureD2: d2 });
-    // β0² = (0.50/1.23)·σ_R² for the same path (DOMAIN §6.2).
+    // β0² = (0.50/1.23)·σ_R² for the same path (METHODS.md §6.2).
     const beta02 = (inputs.rytov_plane_sigma_R2 * 0.5) / 1.23;
     const spherical = gammaGammaParameters({ rytovVariance: beta02, wave: 'spherical', apertureD2: d2 });
     return {

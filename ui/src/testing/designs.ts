@@ -1,7 +1,7 @@
 import type { LinkDesignInput } from '@beamwright/link-core';
 
 /**
- * The worked budget example LB-01 of the project's domain notes (fixtures/reference): 20 dBm at
+ * The worked budget example LB-01 of link-core/METHODS.md §10.1 (fixtures/reference): 20 dBm at
  * 1550 nm, W0 = 25 mm, θ = 1 mrad, 2 km, 100 mm receiver; its published margin is 12.33 dB.
  */
 export const workedExampleDesign: LinkDesignInput = {

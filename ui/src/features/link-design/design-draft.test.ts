@@ -45,7 +45,7 @@ describe('design draft', () => {
     draft.text['transmitter.halfAngleDivergenceRad'] = '2 mrad';
     draft.divergence = { extent: 'full', definition: 'fwhm' };
     const { design } = evaluateDraft(draft, workedExampleDesign);
-    // 1/e² = 1.6986 × FWHM (Gaussian profile; domain notes §0, check GB-05)
+    // 1/e² = 1.6986 × FWHM (Gaussian profile; link-core/METHODS.md §1.3, check GB-05)
     expect(design?.transmitter.halfAngleDivergenceRad).toBeCloseTo((2e-3 * 1.6986) / 2, 7);
     expect(toOneOverESquaredRadius(1, 'radius', '1/e')).toBeCloseTo(Math.SQRT2, 12);
   });
