@@ -16,10 +16,10 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { ensurePostgresBinaries, ensureRoleAndDatabase, findFreePort, isPortInUse, startThrowawayPostgres } from './lib/postgres.mjs';
-import {
-  DEFAULT_ENV, ROOT_DIR, WORKSPACES, ensureChromium, ensureNodeModules, killRunningChildren, runCommand, step,
-  waitForHealth,
-} from './lib/project.mjs';
+import { ensureChromium, ensureNodeModules } from './lib/dependencies.mjs';
+import { DEFAULT_ENV } from './lib/environment.mjs';
+import { ROOT_DIR, WORKSPACES } from './lib/paths.mjs';
+import { killRunningChildren, runCommand, step, waitForHealth } from './lib/processes.mjs';
 import { countNodeTestSummary, countVitest } from './lib/test-reports.mjs';
 
 const SUITE_TIMEOUT_MS = 12 * 60_000;
