@@ -5,5 +5,6 @@
 import { CreateOrganisationsAndUsers1796185289124 } from './1796185289124-CreateOrganisationsAndUsers.js';
 import { CreateSites1796185423186 } from './1796185423186-CreateSites.js';
 import { CreateEquipmentLinksRevisionsReviews1796185633635 } from './1796185633635-CreateEquipmentLinksRevisionsReviews.js';
+import { AddLinkArchiveAndPathChange1796300000000 } from './1796300000000-AddLinkArchiveAndPathChange.js';
 
-export const MIGRATIONS = [CreateOrganisationsAndUsers1796185289124, CreateSites1796185423186, CreateEquipmentLinksRevisionsReviews1796185633635];
+export const MIGRATIONS = [CreateOrganisationsAndUsers1796185289124, CreateSites1796185423186, CreateEquipmentLinksRevisionsReviews1796185633635, AddLinkArchiveAndPathChange1796300000000];
