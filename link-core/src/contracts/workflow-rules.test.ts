@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { ROLES, type Role } from './auth.contract.js';
-import { LINK_STATUSES } from './links.contract.js';
+import type { LINK_STATUSES } from './links.contract.js';
 import {
   allowedLinkActions,
   allowedReviewActions,
