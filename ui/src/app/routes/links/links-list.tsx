@@ -12,6 +12,7 @@ import {
   Option,
   SearchBox,
   Skeleton,
+  Switch,
   SkeletonItem,
   Text,
   Title2,
@@ -56,6 +57,7 @@ function readQuery(searchParams: URLSearchParams): LinksQuery {
     order: searchParams.get('order') === 'asc' ? 'asc' : 'desc',
     status: status && STATUS_OPTIONS.some((option) => option.value === status) ? status : undefined,
     q: searchParams.get('q') ?? undefined,
+    archived: searchParams.get('archived') === 'include' ? 'include' : undefined,
   };
 }
 
@@ -132,6 +134,11 @@ export function LinksListRoute() {
             ))}
           </Dropdown>
         </Field>
+        <Switch
+          label="Show archived links"
+          checked={query.archived === 'include'}
+          onChange={(_, data) => update({ archived: data.checked ? 'include' : undefined, page: undefined })}
+        />
       </div>
 
       <Card className={styles.card}>
@@ -151,7 +158,7 @@ export function LinksListRoute() {
           <div className={styles.empty}>
             <Text weight="semibold">No links match.</Text>
             <Text>
-              {query.q || query.status ? 'Clear the search or the status filter to see every link.' : 'No link has been designed yet.'}
+              {query.q || query.status ? 'Clear the search or the status filter to see every link.' : query.archived ? 'No link has been designed yet.' : 'No link to show; archived links are hidden unless you show them.'}
             </Text>
           </div>
         )}
