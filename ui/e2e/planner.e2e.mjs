@@ -106,11 +106,12 @@ describe('the planner', () => {
     const editedKm = Math.round((metres * 0.9) / 10) / 100;
     await pathLength.fill(`${editedKm} km`);
 
-    // Meanwhile the administrator saves a revision of the same link through the api.
+    // Meanwhile the same engineer, signed in elsewhere (another tab, another machine), saves a
+    // revision of the same link through the api. (Only engineers write designs.)
     const login = await fetch(`${BASE_URL}/api/auth/login`, {
       method: 'POST',
       headers: { 'Content-Type': 'application/json' },
-      body: JSON.stringify({ email: 'admin@demo.test', password: process.env.DEMO_PASSWORD ?? 'demo-pass-2026' }),
+      body: JSON.stringify({ email: 'engineer@demo.test', password: process.env.DEMO_PASSWORD ?? 'demo-pass-2026' }),
     });
     assert.equal(login.status, 200);
     const { accessToken } = await login.json();
