@@ -175,9 +175,13 @@ export class LinksService implements OnModuleInit {
       const since = link.status === 'in_review' ? `while revision ${link.latestRevision} was in review` : `since the approval of revision ${link.latestRevision}`;
       const entries: { action: TrailAction; comment: string }[] = [];
       if (sitesChanged) {
-        const newSites = await this.sites.findOwnedByIds(caller, [siteAId, siteBId].filter((value): value is string => !!value));
-        const byId = (siteId: string | null) => newSites.find((site) => site.id === siteId) ?? null;
-        entries.push({ action: 'path_changed', comment: `Sites changed from ${endsText(found.siteA, found.siteB)} to ${endsText(byId(siteAId), byId(siteBId))} ${since}` });
+        const ids = [link.siteAId, link.siteBId, siteAId, siteBId].filter((value): value is string => !!value);
+        const named = await this.sites.findOwnedByIds(caller, ids);
+        const byId = (siteId: string | null) => named.find((site) => site.id === siteId) ?? null;
+        entries.push({
+          action: 'path_changed',
+          comment: `Sites changed from ${endsText(byId(link.siteAId), byId(link.siteBId))} to ${endsText(byId(siteAId), byId(siteBId))} ${since}`,
+        });
       }
       if (renamed) entries.push({ action: 'renamed', comment: `Renamed from "${link.name}" to "${name}" ${since}` });
       for (const entry of entries) {
