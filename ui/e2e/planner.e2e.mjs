@@ -157,6 +157,35 @@ describe('the planner', () => {
     assert.ok(Math.abs(stored.design.rangeM - editedKm * 1000) < 1e-6);
   });
 
+  it('lets the engineer archive a link behind a confirmation, find it with the archived switch, and restore it', async () => {
+    const { page } = browser;
+    await page.goto(`${BASE_URL}/links?q=Riverside`);
+    const table = page.getByTestId('links-table');
+    await table.locator('[data-link-id] a').first().click();
+    await page.getByTestId('revision-meta').waitFor();
+    const archivedUrl = page.url();
+
+    await page.getByRole('button', { name: 'Archive', exact: true }).click();
+    const confirm = page.getByRole('alertdialog');
+    await confirm.getByText('Archive this link?').waitFor();
+    await confirm.getByRole('button', { name: 'Archive', exact: true }).click();
+    await page.getByTestId('archived-flag').waitFor();
+    assert.match(await textOf(page.getByTestId('revision-meta')), /read-only until restored/);
+    assert.equal(await page.locator('main input[name="rangeM"]').count(), 0, 'an archived link takes no edits');
+
+    await page.goto(`${BASE_URL}/links?q=Riverside`);
+    await page.getByText(/Archived links are hidden/).waitFor();
+    await page.getByRole('switch', { name: 'Show archived links' }).click();
+    await table.waitFor();
+    assert.match(await textOf(table.locator('[data-link-id]').first()), /Archived/);
+
+    await page.goto(archivedUrl);
+    await page.getByRole('button', { name: 'Restore', exact: true }).click();
+    await page.getByRole('alertdialog').getByRole('button', { name: 'Restore', exact: true }).click();
+    await page.locator('main input[name="rangeM"]').waitFor();
+    assert.equal(await page.getByTestId('archived-flag').count(), 0);
+  });
+
   it('gives the installer the design to read and no way to edit it', async () => {
     const { page, context } = browser;
     assert.ok(linkUrl, 'the engineer step opened a link');

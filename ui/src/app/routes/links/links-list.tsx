@@ -158,7 +158,8 @@ export function LinksListRoute() {
           <div className={styles.empty}>
             <Text weight="semibold">No links match.</Text>
             <Text>
-              {query.q || query.status ? 'Clear the search or the status filter to see every link.' : query.archived ? 'No link has been designed yet.' : 'No link to show; archived links are hidden unless you show them.'}
+              {query.q || query.status ? 'Clear the search or the status filter to see every link.' : 'No link has been designed yet.'}
+              {query.archived ? '' : ' Archived links are hidden unless “Show archived links” is on.'}
             </Text>
           </div>
         )}
