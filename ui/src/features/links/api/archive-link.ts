@@ -6,13 +6,13 @@ import type { LinkDetail } from '@/features/links/api/types';
 export const setLinkArchived = (linkId: string, archived: boolean) =>
   api.post<LinkDetail>(`/links/${encodeURIComponent(linkId)}/${archived ? 'archive' : 'unarchive'}`);
 
-export function useSetLinkArchived(linkId: string) {
+export function useSetLinkArchived() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (archived: boolean) => setLinkArchived(linkId, archived),
+    mutationFn: ({ linkId, archived }: { linkId: string; archived: boolean }) => setLinkArchived(linkId, archived),
     onSuccess: (link) => {
-      queryClient.setQueryData(['links', 'detail', linkId], link);
-      // the list, the detail and the trail all show it
+      queryClient.setQueryData(['links', 'detail', link.id], link);
+      // the list and the trail show it too
       return queryClient.invalidateQueries({ queryKey: ['links'] });
     },
   });
