@@ -106,11 +106,12 @@ describe('the planner', () => {
     const editedKm = Math.round((metres * 0.9) / 10) / 100;
     await pathLength.fill(`${editedKm} km`);
 
-    // Meanwhile the administrator saves a revision of the same link through the api.
+    // Meanwhile the same engineer, signed in elsewhere (another tab, another machine), saves a
+    // revision of the same link through the api. (Only engineers write designs.)
     const login = await fetch(`${BASE_URL}/api/auth/login`, {
       method: 'POST',
       headers: { 'Content-Type': 'application/json' },
-      body: JSON.stringify({ email: 'admin@demo.test', password: process.env.DEMO_PASSWORD ?? 'demo-pass-2026' }),
+      body: JSON.stringify({ email: 'engineer@demo.test', password: process.env.DEMO_PASSWORD ?? 'demo-pass-2026' }),
     });
     assert.equal(login.status, 200);
     const { accessToken } = await login.json();
@@ -154,6 +155,35 @@ describe('the planner', () => {
     assert.equal(stored.revision, savedRevision);
     assert.equal(stored.design.transmitter.powerDbm, theirPowerDbm);
     assert.ok(Math.abs(stored.design.rangeM - editedKm * 1000) < 1e-6);
+  });
+
+  it('lets the engineer archive a link behind a confirmation, find it with the archived switch, and restore it', async () => {
+    const { page } = browser;
+    await page.goto(`${BASE_URL}/links?q=Riverside`);
+    const table = page.getByTestId('links-table');
+    await table.locator('[data-link-id] a').first().click();
+    await page.getByTestId('revision-meta').waitFor();
+    const archivedUrl = page.url();
+
+    await page.getByRole('button', { name: 'Archive', exact: true }).click();
+    const confirm = page.getByRole('alertdialog');
+    await confirm.getByText('Archive this link?').waitFor();
+    await confirm.getByRole('button', { name: 'Archive', exact: true }).click();
+    await page.getByTestId('archived-flag').waitFor();
+    assert.match(await textOf(page.getByTestId('revision-meta')), /read-only until restored/);
+    assert.equal(await page.locator('main input[name="rangeM"]').count(), 0, 'an archived link takes no edits');
+
+    await page.goto(`${BASE_URL}/links?q=Riverside`);
+    await page.getByText(/Archived links are hidden/).waitFor();
+    await page.getByRole('switch', { name: 'Show archived links' }).click();
+    await table.waitFor();
+    assert.match(await textOf(table.locator('[data-link-id]').first()), /Archived/);
+
+    await page.goto(archivedUrl);
+    await page.getByRole('button', { name: 'Restore', exact: true }).click();
+    await page.getByRole('alertdialog').getByRole('button', { name: 'Restore', exact: true }).click();
+    await page.locator('main input[name="rangeM"]').waitFor();
+    assert.equal(await page.getByTestId('archived-flag').count(), 0);
   });
 
   it('gives the installer the design to read and no way to edit it', async () => {

@@ -12,7 +12,7 @@ import {
 import type { z } from 'zod';
 import type { AuthUser } from '../common/auth-user.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
-import { DESIGN_WRITERS, Roles } from '../common/decorators/roles.decorator.js';
+import { RolesFor } from '../common/decorators/roles.decorator.js';
 import { openApiSchema } from '../common/openapi/zod-openapi.js';
 import { uuidParam } from '../common/pipes/uuid-param.pipe.js';
 import { ZodValidationPipe } from '../common/pipes/zod-validation.pipe.js';
@@ -41,7 +41,7 @@ export class EquipmentController {
   }
 
   @Post()
-  @Roles(...DESIGN_WRITERS)
+  @RolesFor('equipment.write')
   @ApiBody({ schema: openApiSchema(CreateEquipmentRequestSchema) })
   create(
     @CurrentUser() caller: AuthUser,
@@ -51,7 +51,7 @@ export class EquipmentController {
   }
 
   @Patch(':id')
-  @Roles(...DESIGN_WRITERS)
+  @RolesFor('equipment.write')
   @ApiBody({ schema: openApiSchema(UpdateEquipmentRequestSchema) })
   update(
     @CurrentUser() caller: AuthUser,
@@ -62,7 +62,7 @@ export class EquipmentController {
   }
 
   @Delete(':id')
-  @Roles(...DESIGN_WRITERS)
+  @RolesFor('equipment.write')
   @HttpCode(HttpStatus.NO_CONTENT)
   remove(@CurrentUser() caller: AuthUser, @Param('id', uuidParam()) id: string): Promise<void> {
     return this.equipment.remove(caller, id);

@@ -67,6 +67,17 @@ export class Link {
   @Column({ name: 'latest_wavelength_m', type: 'double precision' })
   latestWavelengthM: number;
 
+  /**
+   * Set when a site under this approved or installed link moved or changed height after the
+   * approval; cleared by the next approval. The approval no longer covers the path while it is set.
+   */
+  @Column({ name: 'path_changed_at', type: 'timestamptz', nullable: true })
+  pathChangedAt: Date | null;
+
+  /** Set while the link is archived: readable, hidden from the default list, takes no changes. */
+  @Column({ name: 'archived_at', type: 'timestamptz', nullable: true })
+  archivedAt: Date | null;
+
   @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
   createdAt: Date;
 

@@ -36,6 +36,10 @@ export function toLinkSummary(link: Link): LinkSummary {
     receivedPowerDbm: link.latestReceivedPowerDbm,
     rangeM: link.latestRangeM,
     wavelengthM: link.latestWavelengthM,
+    pathChangedAt: link.pathChangedAt?.toISOString() ?? null,
+    changedSinceApproval: link.pathChangedAt !== null,
+    archivedAt: link.archivedAt?.toISOString() ?? null,
+    archived: link.archivedAt !== null,
     createdAt: link.createdAt.toISOString(),
     updatedAt: link.updatedAt.toISOString(),
   };
@@ -67,8 +71,10 @@ export function toRevisionSummary(revision: LinkRevision, approval: Approval | n
   };
 }
 
-export function toLinkDetail(link: Link, latest: LinkRevision, approval: Approval | null): LinkDetail {
-  const revision = toRevision(latest, approval);
+/** `approval` is the latest revision's; it shows only while the link is approved or installed. */
+export function toLinkDetail(link: Link, latest: LinkRevision, approval: Approval | null, wasApproved: boolean): LinkDetail {
+  const current = link.status === 'approved' || link.status === 'installed' ? approval : null;
+  const revision = toRevision(latest, current);
   return {
     ...toLinkSummary(link),
     design: revision.design,
@@ -77,7 +83,8 @@ export function toLinkDetail(link: Link, latest: LinkRevision, approval: Approva
     note: revision.note,
     author: revision.author,
     revisedAt: revision.createdAt,
-    approval,
+    approval: current,
+    wasApproved,
   };
 }
 

@@ -1,5 +1,5 @@
-import { Body, Controller, Get, HttpCode, HttpStatus, Param, Patch, Post, Query } from '@nestjs/common';
-import { ApiBearerAuth, ApiBody, ApiConflictResponse, ApiCreatedResponse, ApiOkResponse, ApiQuery, ApiTags } from '@nestjs/swagger';
+import { Body, Controller, Delete, Get, HttpCode, HttpStatus, Param, Patch, Post, Query } from '@nestjs/common';
+import { ApiBearerAuth, ApiBody, ApiConflictResponse, ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiQuery, ApiTags } from '@nestjs/swagger';
 import {
   CreateLinkRequestSchema,
   CreateRevisionRequestSchema,
@@ -27,7 +27,7 @@ import {
 import type { z } from 'zod';
 import type { AuthUser } from '../common/auth-user.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
-import { DESIGN_WRITERS, REVIEWERS, Roles } from '../common/decorators/roles.decorator.js';
+import { RolesFor } from '../common/decorators/roles.decorator.js';
 import { openApiSchema } from '../common/openapi/zod-openapi.js';
 import { PositiveIntParamPipe } from '../common/pipes/positive-int-param.pipe.js';
 import { uuidParam } from '../common/pipes/uuid-param.pipe.js';
@@ -54,7 +54,7 @@ export class LinksController {
   }
 
   @Post()
-  @Roles(...DESIGN_WRITERS)
+  @RolesFor('link.create')
   @ApiBody({ schema: openApiSchema(CreateLinkRequestSchema) })
   @ApiCreatedResponse({ schema: openApiSchema(LinkDetailSchema, 'output') })
   create(@CurrentUser() caller: AuthUser, @Body(new ZodValidationPipe(CreateLinkRequestSchema)) body: z.output<typeof CreateLinkRequestSchema>): Promise<LinkDetail> {
@@ -68,15 +68,45 @@ export class LinksController {
   }
 
   @Patch(':id')
-  @Roles(...DESIGN_WRITERS)
+  @RolesFor('link.update')
   @ApiBody({ schema: openApiSchema(UpdateLinkRequestSchema) })
   @ApiOkResponse({ schema: openApiSchema(LinkDetailSchema, 'output') })
+  @ApiConflictResponse({
+    description: 'the link is archived, or installed and its sites would change (archive it and create a new link); on a link in review or approved a change sends it back to draft',
+  })
   update(
     @CurrentUser() caller: AuthUser,
     @Param('id', uuidParam()) id: string,
     @Body(new ZodValidationPipe(UpdateLinkRequestSchema)) body: z.output<typeof UpdateLinkRequestSchema>,
   ): Promise<LinkDetail> {
     return this.links.update(caller, id, body);
+  }
+
+  @Delete(':id')
+  @RolesFor('link.delete')
+  @HttpCode(HttpStatus.NO_CONTENT)
+  @ApiNoContentResponse({ description: 'the draft, its revisions and its trail are deleted' })
+  @ApiConflictResponse({ description: 'the link was approved once or is past draft: archive it instead' })
+  remove(@CurrentUser() caller: AuthUser, @Param('id', uuidParam()) id: string): Promise<void> {
+    return this.links.remove(caller, id);
+  }
+
+  @Post(':id/archive')
+  @RolesFor('link.archive')
+  @HttpCode(HttpStatus.OK)
+  @ApiOkResponse({ schema: openApiSchema(LinkDetailSchema, 'output') })
+  @ApiConflictResponse({ description: 'the link is already archived' })
+  archive(@CurrentUser() caller: AuthUser, @Param('id', uuidParam()) id: string): Promise<LinkDetail> {
+    return this.links.setArchived(caller, id, true);
+  }
+
+  @Post(':id/unarchive')
+  @RolesFor('link.archive')
+  @HttpCode(HttpStatus.OK)
+  @ApiOkResponse({ schema: openApiSchema(LinkDetailSchema, 'output') })
+  @ApiConflictResponse({ description: 'the link is not archived' })
+  unarchive(@CurrentUser() caller: AuthUser, @Param('id', uuidParam()) id: string): Promise<LinkDetail> {
+    return this.links.setArchived(caller, id, false);
   }
 
   @Get(':id/revisions')
@@ -86,7 +116,7 @@ export class LinksController {
   }
 
   @Post(':id/revisions')
-  @Roles(...DESIGN_WRITERS)
+  @RolesFor('link.revise')
   @ApiBody({ schema: openApiSchema(CreateRevisionRequestSchema) })
   @ApiCreatedResponse({ schema: openApiSchema(LinkDetailSchema, 'output') })
   @ApiConflictResponse({ description: 'baseRevision is not the latest', schema: openApiSchema(RevisionConflictBodySchema, 'output') })
@@ -123,7 +153,7 @@ export class LinksController {
   }
 
   @Post(':id/revisions/:revision/submit')
-  @Roles(...DESIGN_WRITERS)
+  @RolesFor('review.submit')
   @HttpCode(HttpStatus.OK)
   @ApiBody({ schema: openApiSchema(ReviewCommentRequestSchema), required: false })
   @ApiOkResponse({ schema: openApiSchema(ReviewActionResponseSchema, 'output') })
@@ -137,7 +167,7 @@ export class LinksController {
   }
 
   @Post(':id/revisions/:revision/approve')
-  @Roles(...REVIEWERS)
+  @RolesFor('review.approve')
   @HttpCode(HttpStatus.OK)
   @ApiBody({ schema: openApiSchema(ReviewCommentRequestSchema), required: false })
   @ApiOkResponse({ schema: openApiSchema(ReviewActionResponseSchema, 'output') })
@@ -151,7 +181,7 @@ export class LinksController {
   }
 
   @Post(':id/revisions/:revision/return')
-  @Roles(...REVIEWERS)
+  @RolesFor('review.return')
   @HttpCode(HttpStatus.OK)
   @ApiBody({ schema: openApiSchema(ReturnRevisionRequestSchema) })
   @ApiOkResponse({ schema: openApiSchema(ReviewActionResponseSchema, 'output') })
@@ -165,7 +195,7 @@ export class LinksController {
   }
 
   @Post(':id/revisions/:revision/install')
-  @Roles('installer', 'admin')
+  @RolesFor('review.install')
   @HttpCode(HttpStatus.OK)
   @ApiBody({ schema: openApiSchema(ReviewCommentRequestSchema), required: false })
   @ApiOkResponse({ schema: openApiSchema(ReviewActionResponseSchema, 'output') })

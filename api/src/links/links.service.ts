@@ -1,6 +1,6 @@
-import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { BadRequestException, ConflictException, ForbiddenException, Injectable, NotFoundException, type OnModuleInit } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
-import { Brackets, DataSource, Repository } from 'typeorm';
+import { Brackets, DataSource, In, Repository, type EntityManager } from 'typeorm';
 import type {
   Approval,
   CreateLinkRequestSchema,
@@ -13,11 +13,12 @@ import type {
   RevisionListResponse,
   UpdateLinkRequestSchema,
 } from '@beamwright/link-core/contracts';
-import { diffDesigns } from '@beamwright/link-core/contracts';
+import { diffDesigns, isDeletableLink, linkChangeOutcome, type LinkStatus, type TrailAction } from '@beamwright/link-core/contracts';
 import type { z } from 'zod';
 import type { AuthUser } from '../common/auth-user.js';
 import { postgresErrorCode, UNIQUE_VIOLATION } from '../common/database-errors.js';
-import { SitesService } from '../sites/sites.service.js';
+import type { Site } from '../sites/site.entity.js';
+import { SitesService, type SiteGeometryChange } from '../sites/sites.service.js';
 import { computeBudget } from './link-budget.js';
 import { approvalFrom, toLinkDetail, toLinkSummary, toRevision, toRevisionSummary } from './link.mapper.js';
 import { LinkReview } from './link-review.entity.js';
@@ -46,8 +47,20 @@ function escapeLike(text: string): string {
   return text.replace(/[\\%_]/g, (character) => `\\${character}`);
 }
 
+/** "Depot ↔ Harbour Office", with a dash for a missing end. */
+function endsText(siteA: { name: string } | null | undefined, siteB: { name: string } | null | undefined): string {
+  return `${siteA?.name ?? '—'} ↔ ${siteB?.name ?? '—'}`;
+}
+
+const GEOMETRY_WORDS: Record<SiteGeometryChange['field'], { label: string; unit: string }> = {
+  latitudeDeg: { label: 'latitude', unit: '°' },
+  longitudeDeg: { label: 'longitude', unit: '°' },
+  groundElevationM: { label: 'ground elevation', unit: ' m' },
+  mountHeightM: { label: 'mount height', unit: ' m' },
+};
+
 @Injectable()
-export class LinksService {
+export class LinksService implements OnModuleInit {
   constructor(
     @InjectDataSource() private readonly dataSource: DataSource,
     @InjectRepository(Link) private readonly links: Repository<Link>,
@@ -56,6 +69,11 @@ export class LinksService {
     private readonly sites: SitesService,
   ) {}
 
+  onModuleInit(): void {
+    // the sites module cannot import this one (it is imported by it): it calls us back instead
+    this.sites.onGeometryChange((manager, site, changes, caller) => this.markPathChanged(manager, site, changes, caller.userId));
+  }
+
   async list(caller: AuthUser, query: LinkListQuery): Promise<LinkListResponse> {
     const builder = this.links
       .createQueryBuilder('link')
@@ -63,6 +81,8 @@ export class LinksService {
       .leftJoinAndSelect('link.siteA', 'siteA')
       .leftJoinAndSelect('link.siteB', 'siteB')
       .where('link.organisationId = :organisationId', { organisationId: caller.organisationId });
+    if (query.archived === 'only') builder.andWhere('link.archivedAt IS NOT NULL');
+    else if (query.archived !== 'include') builder.andWhere('link.archivedAt IS NULL');
     if (query.status) builder.andWhere('link.status = :status', { status: query.status });
     if (query.siteId) builder.andWhere('(link.siteAId = :siteId OR link.siteBId = :siteId)', { siteId: query.siteId });
     if (query.q) {
@@ -83,8 +103,12 @@ export class LinksService {
 
   async get(caller: AuthUser, id: string): Promise<LinkDetail> {
     const link = await this.findOwnedLink(caller, id);
-    const latest = await this.findRevision(link.id, link.latestRevision);
-    return toLinkDetail(link, latest, await this.findApproval(link.id, link.latestRevision));
+    const [latest, approval, wasApproved] = await Promise.all([
+      this.findRevision(link.id, link.latestRevision),
+      this.findApproval(link.id, link.latestRevision),
+      this.reviews.exists({ where: { linkId: link.id, action: 'approve' } }),
+    ]);
+    return toLinkDetail(link, latest, approval, wasApproved);
   }
 
   async create(caller: AuthUser, input: CreateLinkInput): Promise<LinkDetail> {
@@ -120,16 +144,118 @@ export class LinksService {
     return this.get(caller, linkId);
   }
 
+  /**
+   * Renames a link or changes its ends. What an approval covered does not change silently
+   * (linkChangeOutcome in the shared rules): in review or approved, the change sends the link back
+   * to draft; installed, a rename is recorded and a change of sites refused. The link row is
+   * locked so the status read is the status changed.
+   */
   async update(caller: AuthUser, id: string, changes: UpdateLinkInput): Promise<LinkDetail> {
-    const link = await this.findOwnedLink(caller, id);
-    const siteAId = changes.siteAId === undefined ? link.siteAId : changes.siteAId;
-    const siteBId = changes.siteBId === undefined ? link.siteBId : changes.siteBId;
+    const found = await this.findOwnedLink(caller, id);
+    this.refuseIfArchived(found, 'changed');
+    const siteAId = changes.siteAId === undefined ? found.siteAId : changes.siteAId;
+    const siteBId = changes.siteBId === undefined ? found.siteBId : changes.siteBId;
     await this.checkSites(caller, siteAId, siteBId);
-    await this.links.update(
-      { id: link.id, organisationId: caller.organisationId },
-      { name: changes.name ?? link.name, siteAId, siteBId },
-    );
-    return this.get(caller, link.id);
+    await this.dataSource.transaction(async (manager) => {
+      const link = await manager.findOne(Link, { where: { id: found.id, organisationId: caller.organisationId }, lock: { mode: 'pessimistic_write' } });
+      if (!link) throw new NotFoundException('Link not found');
+      this.refuseIfArchived(link, 'changed');
+      const name = changes.name ?? link.name;
+      const renamed = name !== link.name;
+      const sitesChanged = siteAId !== link.siteAId || siteBId !== link.siteBId;
+      const outcome = linkChangeOutcome(link.status, { renamed, sitesChanged });
+      if (outcome === 'refused') {
+        throw new ConflictException(
+          'The link is installed: its terminals are mounted on the roofs of its sites, so its sites cannot change. Archive this link and create a new one for the new path.',
+        );
+      }
+      const status: LinkStatus = outcome === 'back_to_draft' ? 'draft' : link.status;
+      await manager.update(Link, { id: link.id }, { name, siteAId, siteBId, status });
+      if (outcome === 'silent') return;
+      const since = link.status === 'in_review' ? `while revision ${link.latestRevision} was in review` : `since the approval of revision ${link.latestRevision}`;
+      const entries: { action: TrailAction; comment: string }[] = [];
+      if (sitesChanged) {
+        const ids = [link.siteAId, link.siteBId, siteAId, siteBId].filter((value): value is string => !!value);
+        const named = await this.sites.findOwnedByIds(caller, ids);
+        const byId = (siteId: string | null) => named.find((site) => site.id === siteId) ?? null;
+        entries.push({
+          action: 'path_changed',
+          comment: `Sites changed from ${endsText(byId(link.siteAId), byId(link.siteBId))} to ${endsText(byId(siteAId), byId(siteBId))} ${since}`,
+        });
+      }
+      if (renamed) entries.push({ action: 'renamed', comment: `Renamed from "${link.name}" to "${name}" ${since}` });
+      for (const entry of entries) {
+        await this.recordTrail(manager, link, entry.action, link.status, status, entry.comment, caller.userId);
+      }
+    });
+    return this.get(caller, found.id);
+  }
+
+  /** Archives a link (kept readable, hidden from the default list, read-only) or restores it. */
+  async setArchived(caller: AuthUser, id: string, archived: boolean): Promise<LinkDetail> {
+    await this.dataSource.transaction(async (manager) => {
+      const link = await manager.findOne(Link, { where: { id, organisationId: caller.organisationId }, lock: { mode: 'pessimistic_write' } });
+      if (!link) throw new NotFoundException('Link not found');
+      if ((link.archivedAt !== null) === archived) throw new ConflictException(archived ? 'The link is already archived' : 'The link is not archived');
+      await manager.update(Link, { id: link.id }, { archivedAt: archived ? new Date() : null });
+      await this.recordTrail(manager, link, archived ? 'archived' : 'restored', link.status, link.status, archived ? 'Archived' : 'Restored from the archive', caller.userId);
+    });
+    return this.get(caller, id);
+  }
+
+  /**
+   * Deletes a draft that was never approved, by its owner, with its revisions and trail in one
+   * transaction. Anything else is part of the record: 409, archive it instead.
+   */
+  async remove(caller: AuthUser, id: string): Promise<void> {
+    await this.dataSource.transaction(async (manager) => {
+      const link = await manager.findOne(Link, { where: { id, organisationId: caller.organisationId }, lock: { mode: 'pessimistic_write' } });
+      if (!link) throw new NotFoundException('Link not found');
+      if (link.ownerId !== caller.userId) throw new ForbiddenException('Only the owner of a link can delete it');
+      const wasApproved = await manager.exists(LinkReview, { where: { linkId: link.id, action: 'approve' } });
+      if (!isDeletableLink({ status: link.status, wasApproved })) {
+        throw new ConflictException(
+          wasApproved
+            ? 'The link was approved once and is part of the review record, so it cannot be deleted; archive it instead (POST /api/links/:id/archive)'
+            : 'Only a draft can be deleted; this link is in review or further along. Archive it instead (POST /api/links/:id/archive)',
+        );
+      }
+      await manager.delete(LinkReview, { linkId: link.id });
+      await manager.delete(LinkRevision, { linkId: link.id });
+      await manager.delete(Link, { id: link.id });
+    });
+  }
+
+  /** 409 for a change to an archived link: restore it first. */
+  refuseIfArchived(link: Link, verb: string): void {
+    if (link.archivedAt !== null) throw new ConflictException(`The link is archived and cannot be ${verb}; restore it first`);
+  }
+
+  /** One trail entry on the link's latest revision (inside the caller's transaction). */
+  async recordTrail(manager: EntityManager, link: Link, action: TrailAction, fromStatus: LinkStatus, toStatus: LinkStatus, comment: string, actorId: string): Promise<void> {
+    await manager.insert(LinkReview, { linkId: link.id, revisionNumber: link.latestRevision, action, fromStatus, toStatus, comment, actorId });
+  }
+
+  /**
+   * A site's position or heights changed: every approved or installed link that uses it is marked
+   * changed since approval, with a trail entry saying what moved. Runs in the site update's
+   * transaction. The actor is the member who edited the site.
+   */
+  private async markPathChanged(manager: EntityManager, site: Site, changes: SiteGeometryChange[], actorId: string): Promise<void> {
+    const links = await manager.find(Link, {
+      where: [
+        { siteAId: site.id, status: In(['approved', 'installed']) },
+        { siteBId: site.id, status: In(['approved', 'installed']) },
+      ],
+      lock: { mode: 'pessimistic_write' },
+    });
+    if (links.length === 0) return;
+    const what = changes.map(({ field, from, to }) => `${GEOMETRY_WORDS[field].label} ${from}${GEOMETRY_WORDS[field].unit} → ${to}${GEOMETRY_WORDS[field].unit}`).join(', ');
+    const now = new Date();
+    for (const link of links) {
+      await manager.update(Link, { id: link.id }, { pathChangedAt: now });
+      await this.recordTrail(manager, link, 'path_changed', link.status, link.status, `Site ${site.name}: ${what} since the approval of revision ${link.latestRevision}`, actorId);
+    }
   }
 
   /**
@@ -140,6 +266,7 @@ export class LinksService {
    * (link_id, revision_number) constraint backs this up.
    */
   async createRevision(caller: AuthUser, id: string, input: CreateRevisionInput): Promise<LinkDetail> {
+    this.refuseIfArchived(await this.findOwnedLink(caller, id), 'revised');
     const { budget, linkCoreVersion } = computeBudget(input.design);
     try {
       await this.dataSource.transaction(async (manager) => {

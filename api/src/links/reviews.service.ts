@@ -1,8 +1,7 @@
 import { ConflictException, ForbiddenException, Injectable } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import { DataSource, Repository } from 'typeorm';
-import type { LinkStatus, ReviewAction, ReviewActionResponse, ReviewListResponse } from '@beamwright/link-core/contracts';
-import { REVIEW_TRANSITIONS } from './review-transitions.js';
+import { REVIEW_TRANSITIONS, reviewActionRefusal, rolesFor, type LinkStatus, type ReviewAction, type ReviewActionResponse, type ReviewListResponse } from '@beamwright/link-core/contracts';
 import type { AuthUser } from '../common/auth-user.js';
 import { toReviewEntry } from './link.mapper.js';
 import { LinkReview } from './link-review.entity.js';
@@ -34,6 +33,8 @@ export class ReviewsService {
    * Moves the link's latest revision through review. The status change is a conditional UPDATE on
    * (latest revision, expected status), so a revision saved or acted on concurrently makes this a
    * 409 rather than a review of the wrong revision; the trail entry is written in the same transaction.
+   * Who may act comes from the shared rule table (reviewActionRefusal): the role (403, also checked
+   * by the route's guard), the author's own revision (403), the status (409).
    */
   async act(caller: AuthUser, linkId: string, revisionNumber: number, action: ReviewAction, comment: string): Promise<ReviewActionResponse> {
     const link = await this.links.findOwnedLink(caller, linkId);
@@ -42,14 +43,17 @@ export class ReviewsService {
     if (revisionNumber !== link.latestRevision) {
       throw new ConflictException(`Revision ${revisionNumber} is not the latest (${link.latestRevision}); only the latest revision can be ${transition.verb}`);
     }
-    if (action === 'approve' && revision.authorId === caller.userId) {
-      throw new ForbiddenException('You cannot approve your own revision; another reviewer must approve it');
-    }
+    this.links.refuseIfArchived(link, transition.verb);
+    const refusal = reviewActionRefusal(caller.role, link.status, revision.authorId === caller.userId, action);
+    if (refusal === 'role') throw new ForbiddenException(`This action needs one of the roles: ${rolesFor(transition.permission).join(', ')}`);
+    if (refusal === 'author') throw new ForbiddenException('You cannot approve your own revision; another reviewer must approve it');
+    // a status refusal is left to the conditional UPDATE below, which also catches a concurrent change
     const reviewId = await this.dataSource.transaction(async (manager) => {
       const result = await manager
         .createQueryBuilder()
         .update(Link)
-        .set({ status: transition.to })
+        // an approval covers the path as it is now: it clears "changed since approval"
+        .set(action === 'approve' ? { status: transition.to, pathChangedAt: null } : { status: transition.to })
         .where('id = :id AND organisation_id = :organisationId AND latest_revision = :revisionNumber AND status = :from', {
           id: link.id,
           organisationId: caller.organisationId,

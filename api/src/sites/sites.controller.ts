@@ -11,7 +11,7 @@ import {
 import type { z } from 'zod';
 import type { AuthUser } from '../common/auth-user.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
-import { DESIGN_WRITERS, Roles } from '../common/decorators/roles.decorator.js';
+import { RolesFor } from '../common/decorators/roles.decorator.js';
 import { openApiSchema } from '../common/openapi/zod-openapi.js';
 import { uuidParam } from '../common/pipes/uuid-param.pipe.js';
 import { ZodValidationPipe } from '../common/pipes/zod-validation.pipe.js';
@@ -36,7 +36,7 @@ export class SitesController {
   }
 
   @Post()
-  @Roles(...DESIGN_WRITERS)
+  @RolesFor('site.write')
   @ApiBody({ schema: openApiSchema(CreateSiteRequestSchema) })
   create(
     @CurrentUser() caller: AuthUser,
@@ -46,7 +46,7 @@ export class SitesController {
   }
 
   @Patch(':id')
-  @Roles(...DESIGN_WRITERS)
+  @RolesFor('site.write')
   @ApiBody({ schema: openApiSchema(UpdateSiteRequestSchema) })
   update(
     @CurrentUser() caller: AuthUser,
@@ -57,7 +57,7 @@ export class SitesController {
   }
 
   @Delete(':id')
-  @Roles(...DESIGN_WRITERS)
+  @RolesFor('site.write')
   @HttpCode(HttpStatus.NO_CONTENT)
   remove(@CurrentUser() caller: AuthUser, @Param('id', uuidParam()) id: string): Promise<void> {
     return this.sites.remove(caller, id);

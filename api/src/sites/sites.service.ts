@@ -1,6 +1,6 @@
 import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
-import { InjectRepository } from '@nestjs/typeorm';
-import { In, Repository } from 'typeorm';
+import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
+import { DataSource, In, Repository, type EntityManager } from 'typeorm';
 import type { CreateSiteRequestSchema, SiteResponse, UpdateSiteRequestSchema } from '@beamwright/link-core/contracts';
 import type { z } from 'zod';
 import type { AuthUser } from '../common/auth-user.js';
@@ -8,9 +8,31 @@ import { FOREIGN_KEY_VIOLATION, postgresErrorCode } from '../common/database-err
 import { Site } from './site.entity.js';
 import { toSiteResponse } from './site.mapper.js';
 
+/** The fields that place a terminal: a change to any of them changes the path of the links on the site. */
+export const SITE_GEOMETRY_FIELDS = ['latitudeDeg', 'longitudeDeg', 'groundElevationM', 'mountHeightM'] as const;
+
+export interface SiteGeometryChange {
+  field: (typeof SITE_GEOMETRY_FIELDS)[number];
+  from: number;
+  to: number;
+}
+
+/** Called inside the site update's transaction when the site's geometry changed. */
+export type SiteGeometryChangeHandler = (manager: EntityManager, site: Site, changes: SiteGeometryChange[], caller: AuthUser) => Promise<void>;
+
 @Injectable()
 export class SitesService {
-  constructor(@InjectRepository(Site) private readonly sites: Repository<Site>) {}
+  private readonly geometryHandlers: SiteGeometryChangeHandler[] = [];
+
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    @InjectRepository(Site) private readonly sites: Repository<Site>,
+  ) {}
+
+  /** Lets a module that depends on sites (links) react to a moved site in the same transaction. */
+  onGeometryChange(handler: SiteGeometryChangeHandler): void {
+    this.geometryHandlers.push(handler);
+  }
 
   async list(caller: AuthUser): Promise<SiteResponse[]> {
     const rows = await this.sites.find({ where: { organisationId: caller.organisationId }, order: { name: 'ASC' } });
@@ -27,9 +49,18 @@ export class SitesService {
   }
 
   async update(caller: AuthUser, id: string, changes: z.output<typeof UpdateSiteRequestSchema>): Promise<SiteResponse> {
-    const site = await this.findOwned(caller, id);
-    Object.assign(site, Object.fromEntries(Object.entries(changes).filter(([, value]) => value !== undefined)));
-    return toSiteResponse(await this.sites.save(site));
+    return this.dataSource.transaction(async (manager) => {
+      const site = await manager.findOne(Site, { where: { id, organisationId: caller.organisationId }, lock: { mode: 'pessimistic_write' } });
+      if (!site) throw new NotFoundException('Site not found');
+      const moved: SiteGeometryChange[] = SITE_GEOMETRY_FIELDS.flatMap((field) => {
+        const to = changes[field];
+        return to !== undefined && to !== site[field] ? [{ field, from: site[field], to }] : [];
+      });
+      Object.assign(site, Object.fromEntries(Object.entries(changes).filter(([, value]) => value !== undefined)));
+      const saved = await manager.save(site);
+      if (moved.length > 0) for (const handler of this.geometryHandlers) await handler(manager, saved, moved, caller);
+      return toSiteResponse(saved);
+    });
   }
 
   async remove(caller: AuthUser, id: string): Promise<void> {

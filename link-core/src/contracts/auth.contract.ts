@@ -3,9 +3,10 @@ import { z } from 'zod';
 import { ErrorBodySchema } from './error.contract.js';
 
 /**
- * One role per user: `admin` manages members and settings (and may do what an engineer does),
- * `engineer` creates and edits designs, `reviewer` approves or returns designs, `installer` reads
- * designs and link sheets and records commissioning.
+ * One role per user: `admin` manages members, settings and the reference data (sites, equipment),
+ * `engineer` creates, edits and submits designs, `reviewer` approves or returns them, `installer`
+ * reads designs and link sheets and records the installation. Who may do each action is the table
+ * PERMISSIONS in workflow-rules.ts.
  */
 export const ROLES = ['admin', 'engineer', 'reviewer', 'installer'] as const;
 export const RoleSchema = z.enum(ROLES);

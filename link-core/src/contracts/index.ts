@@ -12,3 +12,4 @@ export * from './equipment.contract.js';
 export * from './links.contract.js';
 export * from './reviews.contract.js';
 export * from './design-diff.js';
+export * from './workflow-rules.js';

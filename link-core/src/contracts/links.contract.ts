@@ -49,6 +49,9 @@ export type UpdateLinkRequest = z.input<typeof UpdateLinkRequestSchema>;
 
 export const LINK_SORT_FIELDS = ['name', 'status', 'updatedAt', 'createdAt', 'linkMarginDb', 'rangeM', 'wavelengthM'] as const;
 
+export const LINK_ARCHIVED_FILTERS = ['exclude', 'include', 'only'] as const;
+export type LinkArchivedFilter = (typeof LINK_ARCHIVED_FILTERS)[number];
+
 export const LinkListQuerySchema = z.strictObject({
   page: queryInteger({ min: 1, max: 100_000, fallback: 1 }),
   pageSize: queryInteger({ min: 1, max: 100, fallback: 20 }),
@@ -59,6 +62,8 @@ export const LinkListQuerySchema = z.strictObject({
   siteId: z.uuid({ error: 'must be a site id (UUID)' }).optional(),
   /** case-insensitive text in the link's name or its sites' names */
   q: textField({ max: 200 }).optional(),
+  /** archived links: left out when absent (or `exclude`), listed with the others (`include`) or alone (`only`) */
+  archived: z.enum(LINK_ARCHIVED_FILTERS, { error: `must be one of ${LINK_ARCHIVED_FILTERS.join(', ')}` }).optional(),
 });
 export type LinkListQuery = z.input<typeof LinkListQuerySchema>;
 
@@ -82,6 +87,16 @@ export const LinkSummarySchema = z.object({
   receivedPowerDbm: z.number(),
   rangeM: z.number(),
   wavelengthM: z.number(),
+  /**
+   * when a site under this approved or installed link last moved or changed height since its
+   * approval; null when nothing changed (cleared by the next approval)
+   */
+  pathChangedAt: IsoDateTimeSchema.nullable(),
+  /** `pathChangedAt !== null`: the approval no longer covers the path as it is */
+  changedSinceApproval: z.boolean(),
+  /** when the link was archived; null while it is not */
+  archivedAt: IsoDateTimeSchema.nullable(),
+  archived: z.boolean(),
   createdAt: IsoDateTimeSchema,
   updatedAt: IsoDateTimeSchema,
 });
@@ -115,7 +130,10 @@ export const LinkDetailSchema = LinkSummarySchema.extend({
   author: UserRefSchema,
   /** when the latest revision was saved */
   revisedAt: IsoDateTimeSchema,
+  /** approval of the latest revision while the link is approved or installed; null otherwise */
   approval: ApprovalSchema.nullable(),
+  /** whether any revision was ever approved (a link that never was may be deleted by its owner) */
+  wasApproved: z.boolean(),
 });
 export type LinkDetail = z.infer<typeof LinkDetailSchema>;
 

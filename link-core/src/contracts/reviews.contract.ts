@@ -8,6 +8,15 @@ export const REVIEW_ACTIONS = ['submit', 'approve', 'return', 'install'] as cons
 export const ReviewActionSchema = z.enum(REVIEW_ACTIONS);
 export type ReviewAction = z.infer<typeof ReviewActionSchema>;
 
+/**
+ * Every kind of entry on a link's trail: the review actions above, and the changes that touch
+ * what an approval covered (written by the api, never requested directly): `renamed`,
+ * `path_changed` (its sites, or a site's position or heights), `archived`, `restored`.
+ */
+export const TRAIL_ACTIONS = [...REVIEW_ACTIONS, 'renamed', 'path_changed', 'archived', 'restored'] as const;
+export const TrailActionSchema = z.enum(TRAIL_ACTIONS);
+export type TrailAction = z.infer<typeof TrailActionSchema>;
+
 /** Body of submit, approve and install: an optional comment. */
 export const ReviewCommentRequestSchema = z.strictObject({ comment: textField({ max: 4000, multiline: true }).default('') });
 export type ReviewCommentRequest = z.input<typeof ReviewCommentRequestSchema>;
@@ -20,7 +29,7 @@ export const ReviewEntrySchema = z.object({
   id: z.uuid(),
   linkId: z.uuid(),
   revision: z.number().int().min(1),
-  action: ReviewActionSchema,
+  action: TrailActionSchema,
   fromStatus: LinkStatusSchema,
   toStatus: LinkStatusSchema,
   comment: z.string(),

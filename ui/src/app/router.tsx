@@ -5,6 +5,7 @@ import { paths } from '@/config/paths';
 import { RequireSession } from '@/lib/auth';
 import { AppShell } from '@/components/layouts/app-shell';
 import { RouteError } from '@/components/errors/route-error';
+import { LinkLifecycleDialogHost } from '@/features/links/components/link-lifecycle-dialog';
 
 const sessionFallback = (
   <div style={{ display: 'grid', placeItems: 'center', minHeight: '60vh' }}>
@@ -25,7 +26,9 @@ export function createRoutes(): RouteObject[] {
       path: paths.app.root.path,
       element: (
         <RequireSession fallback={sessionFallback}>
-          <AppShell />
+          <LinkLifecycleDialogHost>
+            <AppShell />
+          </LinkLifecycleDialogHost>
         </RequireSession>
       ),
       errorElement: <RouteError />,

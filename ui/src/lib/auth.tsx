@@ -5,17 +5,17 @@ import { api, isApiError } from '@/lib/api-client';
 import { clearSessionToken, getSessionToken, setSessionToken, subscribeToSessionToken } from '@/lib/session-token';
 import { paths } from '@/config/paths';
 
-import type { LoginRequest, LoginResponse, MeResponse, Role } from '@beamwright/link-core/contracts';
+import { isAllowed, type LoginRequest, type LoginResponse, type MeResponse, type Role } from '@beamwright/link-core/contracts';
 
 export type { Role } from '@beamwright/link-core/contracts';
 export type SignInInput = LoginRequest;
 export type SignInResponse = LoginResponse;
 export type CurrentUser = MeResponse;
 
-/** What each role may do in the UI; the api enforces the same rules independently. */
+/** What each role may do in the UI, read from the rule table the api enforces (link-core contracts). */
 export const policies = {
-  canEditDesigns: (role: Role | undefined) => role === 'engineer' || role === 'admin',
-  canReview: (role: Role | undefined) => role === 'reviewer' || role === 'admin',
+  canEditDesigns: (role: Role | undefined) => isAllowed(role, 'link.revise'),
+  canReview: (role: Role | undefined) => isAllowed(role, 'review.approve'),
 };
 
 export const ROLE_LABELS: Record<Role, string> = {

@@ -34,6 +34,10 @@ export function linkDetailOf(design: LinkDesignInput = workedExampleDesign, revi
     receivedPowerDbm: stored.budget.receivedPowerDbm,
     rangeM: stored.design.rangeM,
     wavelengthM: stored.design.transmitter.wavelengthM,
+    pathChangedAt: null,
+    changedSinceApproval: false,
+    archivedAt: null,
+    archived: false,
     createdAt: '2026-11-01T10:00:00.000Z',
     updatedAt: stored.createdAt,
     design: stored.design,
@@ -43,5 +47,6 @@ export function linkDetailOf(design: LinkDesignInput = workedExampleDesign, revi
     author: stored.author,
     revisedAt: stored.createdAt,
     approval: null,
+    wasApproved: status === 'approved' || status === 'installed',
   };
 }

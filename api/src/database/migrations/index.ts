@@ -7,6 +7,7 @@ import { CreateSites1796185423186 } from './1796185423186-CreateSites.js';
 import { CreateEquipmentLinksRevisionsReviews1796185633635 } from './1796185633635-CreateEquipmentLinksRevisionsReviews.js';
 import { CreateRateLimitCounters1796200000000 } from './1796200000000-CreateRateLimitCounters.js';
 import { CreateUserSessionsAndDeactivation1796200100000 } from './1796200100000-CreateUserSessionsAndDeactivation.js';
+import { AddLinkArchiveAndPathChange1796300000000 } from './1796300000000-AddLinkArchiveAndPathChange.js';
 
 export const MIGRATIONS = [
   CreateOrganisationsAndUsers1796185289124,
@@ -14,4 +15,5 @@ export const MIGRATIONS = [
   CreateEquipmentLinksRevisionsReviews1796185633635,
   CreateRateLimitCounters1796200000000,
   CreateUserSessionsAndDeactivation1796200100000,
+  AddLinkArchiveAndPathChange1796300000000,
 ];

@@ -1,10 +1,9 @@
 import type { EntityManager } from 'typeorm';
 import { evaluateLink, LINK_CORE_VERSION, LinkDesignSchema, formatZodIssues, type LinkDesign } from '@beamwright/link-core';
-import type { LinkStatus } from '@beamwright/link-core/contracts';
+import { isAllowed, REVIEW_TRANSITIONS, type LinkStatus, type PermissionAction, type Role } from '@beamwright/link-core/contracts';
 import { Link } from '../../links/link.entity.js';
 import { LinkReview } from '../../links/link-review.entity.js';
 import { LinkRevision } from '../../links/link-revision.entity.js';
-import { REVIEW_TRANSITIONS } from '../../links/review-transitions.js';
 import type { LinkFixture } from './demo-fixtures.js';
 
 const DAY_MS = 86_400_000;
@@ -25,11 +24,12 @@ export function mergeDesign(base: Record<string, unknown>, changes: Record<strin
 /**
  * Replays one fixture link's history (revisions and reviews in order) into the database, with the
  * same rules the API enforces: every design validated by LinkDesignSchema, every budget from
- * evaluateLink, every review a legal transition on the latest revision, no self-approval.
+ * evaluateLink, every step by a role the shared rule table allows, every review a legal transition
+ * on the latest revision, no self-approval.
  */
 export async function seedDemoLink(
   manager: EntityManager,
-  context: { organisationId: string; userIds: Map<string, string>; siteIds: Map<string, string>; now: Date },
+  context: { organisationId: string; userIds: Map<string, string>; userRoles: Map<string, Role>; siteIds: Map<string, string>; now: Date },
   fixture: LinkFixture,
 ): Promise<void> {
   const where = (step: number) => `demo link "${fixture.name}", history step ${step + 1}`;
@@ -37,6 +37,10 @@ export async function seedDemoLink(
     const id = context.userIds.get(email.toLowerCase());
     if (!id) throw new Error(`${where(step)}: unknown user ${email}`);
     return id;
+  };
+  const checkRole = (email: string, action: PermissionAction, step: number) => {
+    const role = context.userRoles.get(email.toLowerCase());
+    if (!isAllowed(role, action)) throw new Error(`${where(step)}: ${email} (${role ?? 'no role'}) may not ${action}`);
   };
   const siteId = (key: string | null) => {
     if (key === null) return null;
@@ -57,6 +61,7 @@ export async function seedDemoLink(
     firstAt ??= at;
     lastAt = at;
     if (event.type === 'revision') {
+      checkRole(event.author, link ? 'link.revise' : 'link.create', step);
       const raw = event.design ?? (design && event.changes ? mergeDesign(design as unknown as Record<string, unknown>, event.changes) : undefined);
       if (!raw) throw new Error(`${where(step)}: a revision needs "design" (first) or "changes" (later)`);
       const parsed = LinkDesignSchema.safeParse(raw);
@@ -105,6 +110,7 @@ export async function seedDemoLink(
       if (!link) throw new Error(`${where(step)}: a review needs a revision before it`);
       const transition = REVIEW_TRANSITIONS[event.action];
       if (status !== transition.from) throw new Error(`${where(step)}: cannot ${event.action} a link that is ${status}`);
+      checkRole(event.actor, transition.permission, step);
       const actorId = userId(event.actor, step);
       if (event.action === 'approve' && actorId === latestAuthorId) throw new Error(`${where(step)}: the author cannot approve their own revision`);
       await manager.insert(LinkReview, {

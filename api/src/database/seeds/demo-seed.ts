@@ -38,7 +38,11 @@ export async function seedDemo(
       if (outcome === 'updated') usersUpdated += 1;
     }
     const userIds = new Map<string, string>();
-    for (const user of await manager.getRepository(User).find({ where: { organisationId: organisation.id } })) userIds.set(user.email, user.id);
+    const userRoles = new Map<string, Role>();
+    for (const user of await manager.getRepository(User).find({ where: { organisationId: organisation.id } })) {
+      userIds.set(user.email, user.id);
+      userRoles.set(user.email, user.role);
+    }
 
     let sitesCreated = 0;
     const siteIds = new Map<string, string>();
@@ -66,7 +70,7 @@ export async function seedDemo(
     for (const link of fixtures.links) {
       const exists = await manager.getRepository(Link).exists({ where: { organisationId: organisation.id, name: link.name } });
       if (exists) continue;
-      await seedDemoLink(manager, { organisationId: organisation.id, userIds, siteIds, now }, link);
+      await seedDemoLink(manager, { organisationId: organisation.id, userIds, userRoles, siteIds, now }, link);
       linksCreated += 1;
     }
     return { organisationId: organisation.id, usersCreated, usersUpdated, sitesCreated, equipmentCreated, linksCreated };

@@ -25,8 +25,10 @@ function historyRoutes(role: string, status: 'draft' | 'in_review') {
     rangeM: revision.design.rangeM,
     wavelengthM: revision.design.transmitter.wavelengthM,
   });
+  // the revisions are the demo engineer's; any other role signs in as another member
+  const user = role === 'engineer' ? demoEngineer.user : { ...demoEngineer.user, id: '6f1d2c3b-1111-4a4a-8888-0000000000aa', email: `${role}@demo.test` };
   return [
-    { path: '/auth/me', body: { ...demoEngineer, role } },
+    { path: '/auth/me', body: { ...demoEngineer, user, role } },
     { path: `/links/${LINK_ID}`, body: linkDetailOf({ ...workedExampleDesign, rangeM: 2400 }, 2, status) },
     { path: `/links/${LINK_ID}/revisions`, body: { items: [summary(revision1), summary(revision2)] } },
     {

@@ -57,7 +57,8 @@ export function LinkHistoryRoute() {
   const link = useLink(linkId);
   const revisions = useRevisions(linkId);
   const reviews = useReviews(linkId);
-  const role = useCurrentUser().data?.role;
+  const me = useCurrentUser().data;
+  const role = me?.role;
   const [from, setFrom] = useState<number | null>(null);
   const [to, setTo] = useState<number | null>(null);
 
@@ -145,7 +146,14 @@ export function LinkHistoryRoute() {
             <Subtitle2 as="h2" id="review-heading">
               Review
             </Subtitle2>
-            <ReviewActions linkId={linkId} revision={link.data.revision} status={link.data.status} role={role} />
+            <ReviewActions
+              linkId={linkId}
+              revision={link.data.revision}
+              status={link.data.status}
+              role={role}
+              isAuthor={link.data.author.id === me?.user.id}
+              archived={link.data.archived}
+            />
             {reviews.isPending && <Spinner size="tiny" />}
             {reviews.isError && (
               <MessageBar intent="error">

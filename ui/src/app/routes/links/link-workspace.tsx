@@ -23,8 +23,8 @@ function HistoryButton({ linkId }: { linkId: string }) {
   );
 }
 
-/** Installers and reviewers read the stored design: no inputs, no save. */
-function DesignViewer({ link, role }: { link: LinkDetail; role: Role | undefined }) {
+/** Installers, reviewers and admins read the stored design, as does everyone on an archived link: no inputs, no save. */
+function DesignViewer({ link, role, userId }: { link: LinkDetail; role: Role | undefined; userId: string | undefined }) {
   const styles = useWorkspaceStyles();
   return (
     <>
@@ -33,7 +33,7 @@ function DesignViewer({ link, role }: { link: LinkDetail; role: Role | undefined
         actions={
           <>
             <HistoryButton linkId={link.id} />
-            <ReviewActions linkId={link.id} revision={link.revision} status={link.status} role={role} />
+            <ReviewActions linkId={link.id} revision={link.revision} status={link.status} role={role} isAuthor={link.author.id === userId} archived={link.archived} />
           </>
         }
       />
@@ -53,7 +53,8 @@ function DesignViewer({ link, role }: { link: LinkDetail; role: Role | undefined
 export function LinkWorkspaceRoute() {
   const { linkId = '' } = useParams();
   const link = useLink(linkId);
-  const role = useCurrentUser().data?.role;
+  const me = useCurrentUser().data;
+  const role = me?.role;
 
   if (link.isPending) {
     return (
@@ -64,7 +65,8 @@ export function LinkWorkspaceRoute() {
     );
   }
   if (link.isError) return <ErrorView error={link.error} />;
-  if (!policies.canEditDesigns(role)) return <DesignViewer link={link.data} role={role} />;
+  // an archived link is read-only, for engineers too, until it is restored
+  if (!policies.canEditDesigns(role) || link.data.archived) return <DesignViewer link={link.data} role={role} userId={me?.user.id} />;
   return <DesignEditor key={link.data.id} link={link.data} historyAction={<HistoryButton linkId={link.data.id} />} />;
 }
 

@@ -12,6 +12,7 @@ import {
   Option,
   SearchBox,
   Skeleton,
+  Switch,
   SkeletonItem,
   Text,
   Title2,
@@ -56,6 +57,7 @@ function readQuery(searchParams: URLSearchParams): LinksQuery {
     order: searchParams.get('order') === 'asc' ? 'asc' : 'desc',
     status: status && STATUS_OPTIONS.some((option) => option.value === status) ? status : undefined,
     q: searchParams.get('q') ?? undefined,
+    archived: searchParams.get('archived') === 'include' ? 'include' : undefined,
   };
 }
 
@@ -132,6 +134,11 @@ export function LinksListRoute() {
             ))}
           </Dropdown>
         </Field>
+        <Switch
+          label="Show archived links"
+          checked={query.archived === 'include'}
+          onChange={(_, data) => update({ archived: data.checked ? 'include' : undefined, page: undefined })}
+        />
       </div>
 
       <Card className={styles.card}>
@@ -152,6 +159,7 @@ export function LinksListRoute() {
             <Text weight="semibold">No links match.</Text>
             <Text>
               {query.q || query.status ? 'Clear the search or the status filter to see every link.' : 'No link has been designed yet.'}
+              {query.archived ? '' : ' Archived links are hidden unless “Show archived links” is on.'}
             </Text>
           </div>
         )}

@@ -11,6 +11,8 @@ export interface LinksQuery {
   order: 'asc' | 'desc';
   status?: LinkStatus;
   q?: string;
+  /** archived links: hidden unless `include` (with the others) or `only` */
+  archived?: 'include' | 'only';
 }
 
 export const getLinks = (query: LinksQuery, signal?: AbortSignal) =>
@@ -23,6 +25,7 @@ export const getLinks = (query: LinksQuery, signal?: AbortSignal) =>
       order: query.order,
       status: query.status,
       q: query.q,
+      archived: query.archived,
     },
   });
 

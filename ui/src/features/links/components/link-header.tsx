@@ -5,6 +5,8 @@ import { ChevronRightRegular } from '@fluentui/react-icons';
 import { paths } from '@/config/paths';
 import { formatDateTime } from '@/lib/format';
 import { LinkStatusBadge } from '@/features/links/components/link-status-badge';
+import { LinkFlags } from '@/features/links/components/link-flags';
+import { LinkLifecycleActions } from '@/features/links/components/link-lifecycle-actions';
 import type { LinkDetail } from '@/features/links/api/types';
 
 const useStyles = makeStyles({
@@ -13,6 +15,7 @@ const useStyles = makeStyles({
   crumbLink: { color: tokens.colorBrandForeground1 },
   titleRow: { display: 'flex', alignItems: 'center', columnGap: tokens.spacingHorizontalM, flexWrap: 'wrap' },
   meta: { color: tokens.colorNeutralForeground3 },
+  warning: { color: tokens.colorPaletteRedForeground1, margin: 0, maxWidth: '70ch' },
   actions: { display: 'flex', columnGap: tokens.spacingHorizontalS, flexWrap: 'wrap' },
 });
 
@@ -42,13 +45,24 @@ export function LinkHeader({ link, section, actions }: { link: LinkDetail; secti
         <div className={styles.titleRow}>
           <Title2 as="h1">{section ?? link.name}</Title2>
           <LinkStatusBadge status={link.status} />
+          <LinkFlags link={link} />
         </div>
         <Caption1 className={styles.meta} data-testid="revision-meta">
           {ends}Revision {link.revision} by {link.author.displayName}, {formatDateTime(link.revisedAt)}
           {link.approval ? ` · approved by ${link.approval.by.displayName}` : ''}
+          {link.archivedAt ? ` · archived ${formatDateTime(link.archivedAt)}, read-only until restored` : ''}
         </Caption1>
+        {link.pathChangedAt && (
+          <Caption1 as="p" className={styles.warning} data-testid="path-changed-note">
+            A site of this link moved or changed height on {formatDateTime(link.pathChangedAt)}, after its approval: the approval does not cover
+            the path as it is now. Save a revision and have it reviewed again.
+          </Caption1>
+        )}
       </div>
-      {actions && <div className={styles.actions}>{actions}</div>}
+      <div className={styles.actions}>
+        {actions}
+        <LinkLifecycleActions link={link} />
+      </div>
     </div>
   );
 }

@@ -21,6 +21,7 @@ import { paths } from '@/config/paths';
 import { formatDateTime, formatDistance, formatRelativeTime, formatWavelength } from '@/lib/format';
 import { MarginBadge } from '@/components/ui/margin-verdict';
 import { LinkStatusBadge } from '@/features/links/components/link-status-badge';
+import { LinkFlags } from '@/features/links/components/link-flags';
 import type { LinkSummary } from '@/features/links/api/types';
 import type { LinkSortField } from '@/features/links/api/get-links';
 
@@ -28,6 +29,7 @@ const useStyles = makeStyles({
   name: { fontWeight: tokens.fontWeightSemibold },
   sites: { color: tokens.colorNeutralForeground3, fontSize: tokens.fontSizeBase200 },
   nameCell: { display: 'flex', flexDirection: 'column', paddingBlock: tokens.spacingVerticalS },
+  status: { display: 'flex', flexWrap: 'wrap', gap: tokens.spacingHorizontalXS, paddingBlock: tokens.spacingVerticalXS },
   numeric: { fontVariantNumeric: 'tabular-nums', justifyContent: 'flex-end', textAlign: 'end' },
 });
 
@@ -65,7 +67,12 @@ export function LinksTable({ links, sort, onSortChange }: LinksTableProps) {
         columnId: 'status',
         compare: (a, b) => a.status.localeCompare(b.status),
         renderHeaderCell: () => 'Status',
-        renderCell: (link) => <LinkStatusBadge status={link.status} />,
+        renderCell: (link) => (
+          <span className={styles.status}>
+            <LinkStatusBadge status={link.status} />
+            <LinkFlags link={link} />
+          </span>
+        ),
       }),
       createTableColumn<LinkSummary>({
         columnId: 'linkMarginDb',
@@ -121,7 +128,7 @@ export function LinksTable({ links, sort, onSortChange }: LinksTableProps) {
       data-testid="links-table"
       columnSizingOptions={{
         name: { minWidth: 240, idealWidth: 320 },
-        status: { minWidth: 120 },
+        status: { minWidth: 120, idealWidth: 200 },
         linkMarginDb: { minWidth: 170 },
       }}
       resizableColumns

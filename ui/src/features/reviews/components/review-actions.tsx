@@ -17,7 +17,7 @@ import {
   tokens,
 } from '@fluentui/react-components';
 import { ArrowReplyRegular, CheckmarkRegular, PlugConnectedRegular, SendRegular } from '@fluentui/react-icons';
-import type { LinkStatus, ReviewAction, Role } from '@beamwright/link-core/contracts';
+import { allowedReviewActions, type LinkStatus, type ReviewAction, type Role } from '@beamwright/link-core/contracts';
 import { useActOnRevision } from '@/features/reviews/api/act-on-revision';
 
 const useStyles = makeStyles({
@@ -35,33 +35,43 @@ interface ActionSpec {
   appearance: 'primary' | 'secondary';
 }
 
-function actionsFor(role: Role | undefined, status: LinkStatus): ActionSpec[] {
-  const actions: ActionSpec[] = [];
-  const writes = role === 'engineer' || role === 'admin';
-  const reviews = role === 'reviewer' || role === 'admin';
-  const installs = role === 'installer' || role === 'admin';
-  if (writes && status === 'draft') {
-    actions.push({ action: 'submit', label: 'Submit for review', title: 'Submit for review', explain: 'A reviewer will approve the revision or return it with comments.', commentRequired: false, icon: <SendRegular />, appearance: 'primary' });
-  }
-  if (reviews && status === 'in_review') {
-    actions.push({ action: 'approve', label: 'Approve', title: 'Approve this revision', explain: 'Approval is recorded with your name and the time; an approved revision never changes.', commentRequired: false, icon: <CheckmarkRegular />, appearance: 'primary' });
-    actions.push({ action: 'return', label: 'Return with comment', title: 'Return to the engineer', explain: 'Say what must change; the link goes back to draft.', commentRequired: true, icon: <ArrowReplyRegular />, appearance: 'secondary' });
-  }
-  if (installs && status === 'approved') {
-    actions.push({ action: 'install', label: 'Record as installed', title: 'Record as installed', explain: 'Marks the approved revision as the one mounted and aligned on site.', commentRequired: false, icon: <PlugConnectedRegular />, appearance: 'secondary' });
-  }
-  return actions;
+const ACTION_SPECS: Record<ReviewAction, ActionSpec> = {
+  submit: { action: 'submit', label: 'Submit for review', title: 'Submit for review', explain: 'A reviewer will approve the revision or return it with comments.', commentRequired: false, icon: <SendRegular />, appearance: 'primary' },
+  approve: { action: 'approve', label: 'Approve', title: 'Approve this revision', explain: 'Approval is recorded with your name and the time; an approved revision never changes.', commentRequired: false, icon: <CheckmarkRegular />, appearance: 'primary' },
+  return: { action: 'return', label: 'Return with comment', title: 'Return to the engineer', explain: 'Say what must change; the link goes back to draft.', commentRequired: true, icon: <ArrowReplyRegular />, appearance: 'secondary' },
+  install: { action: 'install', label: 'Record as installed', title: 'Record as installed', explain: 'Marks the approved revision as the one mounted and aligned on site.', commentRequired: false, icon: <PlugConnectedRegular />, appearance: 'secondary' },
+};
+
+/** The buttons the shared rules (allowedReviewActions) give this caller on this link. */
+function actionsFor(role: Role | undefined, status: LinkStatus, isAuthor: boolean): ActionSpec[] {
+  return allowedReviewActions(role, status, isAuthor).map((action) => ACTION_SPECS[action]);
 }
 
 /** The review step the caller's role allows on the latest revision, each with a comment. */
-export function ReviewActions({ linkId, revision, status, role }: { linkId: string; revision: number; status: LinkStatus; role: Role | undefined }) {
+export function ReviewActions({
+  linkId,
+  revision,
+  status,
+  role,
+  isAuthor = false,
+  archived = false,
+}: {
+  linkId: string;
+  revision: number;
+  status: LinkStatus;
+  role: Role | undefined;
+  /** whether the caller wrote the latest revision (no approving one's own) */
+  isAuthor?: boolean;
+  /** an archived link takes no review steps until it is restored */
+  archived?: boolean;
+}) {
   const styles = useStyles();
   const act = useActOnRevision(linkId);
   const [open, setOpen] = useState<ActionSpec | null>(null);
   const [comment, setComment] = useState('');
   const [commentError, setCommentError] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
-  const actions = actionsFor(role, status);
+  const actions = archived ? [] : actionsFor(role, status, isAuthor);
   if (actions.length === 0) return null;
 
   const submit = () => {

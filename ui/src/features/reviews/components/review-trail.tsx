@@ -1,5 +1,5 @@
 import { Caption1, Text, makeStyles, tokens } from '@fluentui/react-components';
-import { ArrowReplyRegular, CheckmarkStarburstRegular, PlugConnectedRegular, SendRegular } from '@fluentui/react-icons';
+import { ArchiveRegular, ArrowReplyRegular, ArrowUndoRegular, CheckmarkStarburstRegular, LocationRegular, PlugConnectedRegular, RenameRegular, SendRegular } from '@fluentui/react-icons';
 import type { ReviewEntry } from '@beamwright/link-core/contracts';
 import { formatDateTime } from '@/lib/format';
 
@@ -22,6 +22,10 @@ const ACTION_TEXT: Record<ReviewEntry['action'], string> = {
   approve: 'approved revision {n}',
   return: 'returned revision {n} to the engineer',
   install: 'recorded revision {n} as installed',
+  renamed: 'renamed the link (revision {n})',
+  path_changed: 'changed the path of revision {n}',
+  archived: 'archived the link',
+  restored: 'restored the link from the archive',
 };
 
 const ACTION_ICON = {
@@ -29,6 +33,10 @@ const ACTION_ICON = {
   approve: CheckmarkStarburstRegular,
   return: ArrowReplyRegular,
   install: PlugConnectedRegular,
+  renamed: RenameRegular,
+  path_changed: LocationRegular,
+  archived: ArchiveRegular,
+  restored: ArrowUndoRegular,
 } as const;
 
 /** Who moved the link through review, when, and what they said. */
