@@ -3,7 +3,7 @@ import { screen } from '@testing-library/react';
 import { demoEngineer, mockApi, renderApp } from '@/testing/test-utils';
 import { LINK_ID, linkDetailOf } from '@/testing/link-fixtures';
 import { setSessionToken } from '@/lib/session-token';
-import type { LinkDetail } from '@/features/links/api/types';
+import type { LinkDetail } from '@beamwright/link-core/contracts';
 
 vi.mock('@/components/charts/lazy-echart', () => ({
   LazyEChart: ({ ariaLabel }: { ariaLabel: string }) => <div role="img" aria-label={ariaLabel} />,
