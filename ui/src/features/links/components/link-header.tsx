@@ -13,7 +13,7 @@ const useStyles = makeStyles({
   crumbLink: { color: tokens.colorBrandForeground1 },
   titleRow: { display: 'flex', alignItems: 'center', columnGap: tokens.spacingHorizontalM, flexWrap: 'wrap' },
   meta: { color: tokens.colorNeutralForeground3 },
-  actions: { display: 'flex', columnGap: tokens.spacingHorizontalS, flexWrap: 'wrap' },
+  actions: { display: 'flex', columnGap: tokens.spacingHorizontalS, rowGap: tokens.spacingVerticalS, flexWrap: 'wrap' },
 });
 
 export function LinkHeader({ link, section, actions }: { link: LinkDetail; section?: string; actions?: ReactNode }) {
