@@ -57,12 +57,23 @@ function preferredMode(): ThemeMode {
   return window.matchMedia?.('(prefers-color-scheme: dark)').matches ? 'dark' : 'light';
 }
 
+// A choice made in another tab (a storage event) or a change of the system setting applies here too.
 function subscribe(listener: () => void) {
   listeners.add(listener);
-  return () => listeners.delete(listener);
+  const onStorage = (event: StorageEvent) => {
+    if (event.key === STORAGE_KEY || event.key === null) listener();
+  };
+  const systemQuery = window.matchMedia?.('(prefers-color-scheme: dark)');
+  window.addEventListener('storage', onStorage);
+  systemQuery?.addEventListener?.('change', listener);
+  return () => {
+    listeners.delete(listener);
+    window.removeEventListener('storage', onStorage);
+    systemQuery?.removeEventListener?.('change', listener);
+  };
 }
 
-/** The theme mode, remembered across visits; follows the system until the user picks one. */
+/** The theme mode, remembered across visits and shared by the open tabs; follows the system until the user picks one. */
 export function useThemeMode(): [ThemeMode, (mode: ThemeMode) => void] {
   const mode = useSyncExternalStore(subscribe, preferredMode, () => 'light' as const);
   const setMode = useCallback((next: ThemeMode) => {

@@ -23,13 +23,22 @@ const useStyles = makeStyles({
     alignItems: 'center',
     columnGap: tokens.spacingHorizontalL,
     paddingInline: tokens.spacingHorizontalXL,
-    height: '56px',
+    minHeight: '56px',
     backgroundColor: '#0a2f38',
     color: '#e6f4f6',
     boxShadow: tokens.shadow4,
     position: 'sticky',
     top: 0,
     zIndex: 10,
+    // Reflow (WCAG 1.4.10): on a narrow screen the header wraps onto a second line and scrolls away.
+    flexWrap: 'wrap',
+    rowGap: tokens.spacingVerticalXS,
+    '@media (max-width: 640px)': {
+      position: 'static',
+      paddingInline: tokens.spacingHorizontalM,
+      paddingBlock: tokens.spacingVerticalS,
+      columnGap: tokens.spacingHorizontalS,
+    },
   },
   brand: {
     display: 'flex',
@@ -41,7 +50,12 @@ const useStyles = makeStyles({
     fontSize: tokens.fontSizeBase400,
     letterSpacing: '0.02em',
   },
-  nav: { display: 'flex', columnGap: tokens.spacingHorizontalXS, marginInlineStart: tokens.spacingHorizontalL },
+  nav: {
+    display: 'flex',
+    columnGap: tokens.spacingHorizontalXS,
+    marginInlineStart: tokens.spacingHorizontalL,
+    '@media (max-width: 640px)': { marginInlineStart: 0 },
+  },
   navLink: {
     color: '#b7dfe7',
     textDecorationLine: 'none',
@@ -58,7 +72,13 @@ const useStyles = makeStyles({
   },
   spacer: { flexGrow: 1 },
   user: { display: 'flex', alignItems: 'center', columnGap: tokens.spacingHorizontalS },
-  userText: { display: 'flex', flexDirection: 'column', lineHeight: tokens.lineHeightBase200 },
+  userText: {
+    display: 'flex',
+    flexDirection: 'column',
+    lineHeight: tokens.lineHeightBase200,
+    // the avatar keeps the name (as its label) when there is no room for the text
+    '@media (max-width: 640px)': { display: 'none' },
+  },
   userName: { color: '#ffffff', fontWeight: tokens.fontWeightSemibold },
   userOrg: { color: '#b7dfe7', fontSize: tokens.fontSizeBase200 },
   headerButton: {
@@ -75,6 +95,7 @@ const useStyles = makeStyles({
     boxSizing: 'border-box',
     paddingBlock: tokens.spacingVerticalXL,
     paddingInline: tokens.spacingHorizontalXXL,
+    '@media (max-width: 640px)': { paddingInline: tokens.spacingHorizontalM },
   },
 });
 

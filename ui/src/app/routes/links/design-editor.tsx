@@ -20,6 +20,7 @@ import {
   Textarea,
   makeStyles,
   tokens,
+  useRestoreFocusTarget,
 } from '@fluentui/react-components';
 import { ArrowUndoRegular, DismissRegular, SaveRegular } from '@fluentui/react-icons';
 import type { LinkDesignInput } from '@beamwright/link-core';
@@ -73,6 +74,8 @@ export function DesignEditor({ link, historyAction }: { link: LinkDetail; histor
   const [rebaseNotice, setRebaseNotice] = useState<{ revision: number; reapplied: string[]; overlapping: string[] } | null>(null);
   const [restoredNotice, setRestoredNotice] = useState(false);
   const saveRevision = useSaveRevision(link.id);
+  // the dialogs opened from the save button give the focus back to it when they close
+  const restoreFocusTarget = useRestoreFocusTarget();
 
   const hasChanges = workspace.changedFieldIds.length > 0;
 
@@ -202,9 +205,11 @@ export function DesignEditor({ link, historyAction }: { link: LinkDetail; histor
               </Button>
             )}
             <Button
+              {...restoreFocusTarget}
               appearance="primary"
               icon={<SaveRegular />}
-              disabled={!hasChanges || !workspace.design}
+              // stays focusable once disabled: after a save, keyboard focus stays here instead of falling to the page
+              disabledFocusable={!hasChanges || !workspace.design}
               onClick={() => {
                 setNoteError(null);
                 setSaveError(null);
@@ -227,7 +232,8 @@ export function DesignEditor({ link, historyAction }: { link: LinkDetail; histor
         </Body1>
       </div>
 
-      <div className={styles.notices}>
+      {/* Save, conflict and restore notices are announced as they appear. */}
+      <div className={styles.notices} role="status" aria-live="polite" data-testid="workspace-notices">
         {savedRevision !== null && (
           <MessageBar intent="success" data-testid="saved-notice">
             <MessageBarBody>Saved as revision {savedRevision}. It is a draft until submitted for review.</MessageBarBody>

@@ -64,11 +64,17 @@ describe('link workspace (engineer)', () => {
     renderApp(`/links/${LINK_ID}`);
     await screen.findByTestId('link-margin', {}, { timeout: 8000 });
     fireEvent.change(rangeInput(), { target: { value: '2 furlongs' } });
-    expect(await screen.findByText(/^Path length unknown unit "furlongs"/)).toBeInTheDocument();
+    const message = await screen.findByText(/^Path length unknown unit "furlongs"/);
     expect(rangeInput()).toHaveAttribute('aria-invalid', 'true');
+    // tied to its field: the input is described by the message (Fluent Field's validationMessage)
+    const messageId = message.closest('[id]')?.id;
+    expect(messageId).toBeTruthy();
+    expect(rangeInput().getAttribute('aria-describedby')?.split(' ')).toContain(messageId);
+    expect(rangeInput()).toHaveAccessibleDescription(expect.stringContaining('Path length unknown unit "furlongs"'));
     expect(screen.getByTestId('stale-results')).toBeInTheDocument();
     expect(screen.getByTestId('link-margin').textContent).toMatch(/^\+12\.3\d dB$/);
-    expect(screen.getByRole('button', { name: 'Save as revision 3' })).toBeDisabled();
+    // disabled but still focusable (aria-disabled), so keyboard focus is never dropped
+    expect(screen.getByRole('button', { name: 'Save as revision 3' })).toHaveAttribute('aria-disabled', 'true');
 
     fireEvent.change(powerInput(), { target: { value: '60 dBm' } });
     expect(await screen.findByText('Transmit power must be at most 50 dBm (100 W)')).toBeInTheDocument();
@@ -122,6 +128,7 @@ describe('link workspace (engineer)', () => {
     expect(powerInput().value).toBe('18 dBm');
     expect(screen.getByTestId('rebase-notice')).toHaveTextContent('Now editing on top of revision 3');
     expect(screen.getByTestId('rebase-notice')).toHaveTextContent('Path length');
+    expect(screen.getByTestId('rebase-notice').closest('[role="status"]')).toHaveAttribute('aria-live', 'polite');
     // the closing alert dialog keeps the page inert until its exit animation ends
     expect(await screen.findByRole('button', { name: 'Save as revision 4' })).toBeEnabled();
 
@@ -146,10 +153,15 @@ describe('link workspace (engineer)', () => {
     await userEvent.click(screen.getByRole('button', { name: 'Save as revision 3' }));
     const dialog = await findDialog();
     await userEvent.click(within(dialog).getByRole('button', { name: 'Save revision', hidden: true }));
-    expect(within(dialog).getByText(/Add a note: what changed and why/)).toBeInTheDocument();
+    const noteError = within(dialog).getByText(/Add a note: what changed and why/);
+    const note = within(dialog).getByRole('textbox', { hidden: true });
+    expect(note).toHaveAttribute('aria-invalid', 'true');
+    expect(note.getAttribute('aria-describedby')?.split(' ')).toContain(noteError.closest('[id]')?.id);
     await userEvent.type(within(dialog).getByRole('textbox', { hidden: true }), 'Shorter path');
     await userEvent.click(within(dialog).getByRole('button', { name: 'Save revision', hidden: true }));
     expect(await screen.findByTestId('saved-notice')).toHaveTextContent('Saved as revision 3.');
+    // announced: the notice appears inside a polite live region that was there before it
+    expect(screen.getByTestId('saved-notice').closest('[role="status"]')).toHaveAttribute('aria-live', 'polite');
     const post = calls.find((call) => call.method === 'POST');
     expect(post?.body).toMatchObject({ baseRevision: 2, note: 'Shorter path', design: { rangeM: 1800 } });
     expect(screen.getByTestId('edit-status')).toHaveTextContent('No unsaved changes to revision 3.');

@@ -43,4 +43,39 @@ describe('links table', () => {
     expect(request.url.searchParams.get('sort')).toBe('updatedAt');
     expect(request.url.searchParams.get('order')).toBe('desc');
   });
+
+  it('makes each name one plain link to the workspace and says every verdict in words beside an icon', async () => {
+    mockApi([
+      { path: '/auth/me', body: demoEngineer },
+      {
+        path: '/links',
+        body: {
+          items: [
+            summary({ id: '11111111-1111-4111-8111-111111111111', name: 'Quay to depot', status: 'approved', linkMarginDb: 1.2 }),
+            summary({ id: '22222222-2222-4222-8222-222222222222', name: 'Mill to school', status: 'in_review', linkMarginDb: -3 }),
+          ],
+          page: 1,
+          pageSize: 20,
+          total: 2,
+        },
+      },
+    ]);
+    renderApp('/links');
+    const table = await screen.findByTestId('links-table');
+    const [, first, second] = within(table).getAllByRole('row');
+    // one focus stop per name: a link, not a button wrapped around a link
+    const link = within(first!).getByRole('link', { name: 'Quay to depot' });
+    expect(link).toHaveAttribute('href', '/links/11111111-1111-4111-8111-111111111111');
+    expect(within(first!).queryAllByRole('button')).toHaveLength(0);
+    expect(link.closest('[role="gridcell"]')).not.toHaveAttribute('tabindex');
+    // verdicts and review states: a word and an icon beside the colour
+    for (const [row, verdict, status] of [[first!, 'Thin', 'Approved'], [second!, 'Fails', 'In review']] as const) {
+      const margin = row.querySelector('[data-verdict]')!;
+      expect(margin).toHaveTextContent(verdict);
+      expect(margin.querySelector('svg')).not.toBeNull();
+      const state = row.querySelector('[data-status]')!;
+      expect(state).toHaveTextContent(status);
+      expect(state.querySelector('svg')).not.toBeNull();
+    }
+  });
 });

@@ -37,10 +37,10 @@ const STATUS_OPTIONS: { value: LinkStatus | ''; label: string }[] = [
 ];
 
 const useStyles = makeStyles({
-  header: { display: 'flex', alignItems: 'flex-end', justifyContent: 'space-between', columnGap: tokens.spacingHorizontalL, marginBottom: tokens.spacingVerticalL },
+  header: { display: 'flex', flexWrap: 'wrap', alignItems: 'flex-end', justifyContent: 'space-between', columnGap: tokens.spacingHorizontalL, rowGap: tokens.spacingVerticalS, marginBottom: tokens.spacingVerticalL },
   subtitle: { color: tokens.colorNeutralForeground3 },
   toolbar: { display: 'flex', flexWrap: 'wrap', alignItems: 'flex-end', columnGap: tokens.spacingHorizontalL, rowGap: tokens.spacingVerticalS, marginBottom: tokens.spacingVerticalM },
-  search: { minWidth: '280px' },
+  search: { minWidth: 'min(280px, 100%)' },
   card: { padding: 0, overflowX: 'auto' },
   footer: { display: 'flex', alignItems: 'center', justifyContent: 'space-between', padding: tokens.spacingHorizontalM },
   empty: { padding: tokens.spacingHorizontalXXL, display: 'grid', rowGap: tokens.spacingVerticalS, justifyItems: 'start' },

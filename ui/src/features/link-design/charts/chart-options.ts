@@ -4,6 +4,7 @@ import type { BeamEnvelope, LinkBudget, RangeSweep, VisibilitySweep } from '@bea
 import type { ChartOption } from '@/components/charts/echart';
 import { CHART_TEXT, axisStyle, type ChartMode } from '@/components/charts/chart-theme';
 import { beamPalette } from '@/lib/theme';
+import { MARGIN_VERDICT_TEXT, marginVerdict } from '@/components/ui/margin-verdict';
 
 const SHORT_TERM_NAMES: Record<string, string> = {
   transmitPower: 'Tx power',
@@ -20,6 +21,9 @@ function round(value: number, digits = 2): string {
   const text = value.toFixed(digits);
   return Number(text) === 0 ? (0).toFixed(digits) : text.replace('-', '\u2212');
 }
+
+// The tables give each margin the same worded verdict as the headline and the links list.
+const marginWord = (marginDb: number): string => MARGIN_VERDICT_TEXT[marginVerdict(marginDb)];
 
 interface WaterfallStep {
   name: string;
@@ -137,13 +141,34 @@ function distanceAxis(maxM: number): { unit: 'km' | 'm'; factor: number } {
   return maxM >= 1000 ? { unit: 'km', factor: 1e-3 } : { unit: 'm', factor: 1 };
 }
 
-export function beamEnvelopeOption(envelope: BeamEnvelope, mode: ChartMode): ChartOption {
+/**
+ * The values a chart plots, in the units of its axes, and the same values as a table: the table
+ * under each chart is built from these very points, so it always says what the chart shows.
+ */
+export interface ChartData {
+  columns: string[];
+  /** one row per plotted sample; a column is a number (in the unit its heading names) or a word */
+  rows: (number | string)[][];
+}
+
+/** The beam's upper edge as plotted: distance in km (or m) against the 1/e² radius in mm (or m). */
+export function beamEnvelopePoints(envelope: BeamEnvelope) {
   const rangeM = envelope.distanceM[envelope.distanceM.length - 1] ?? 0;
   const x = distanceAxis(rangeM);
   const largest = Math.max(...envelope.beamRadiusM, envelope.receiveApertureRadiusM);
   const y = largest < 0.5 ? { unit: 'mm', factor: 1e3 } : { unit: 'm', factor: 1 };
+  const points = envelope.distanceM.map((distance, index) => [distance * x.factor, envelope.beamRadiusM[index]! * y.factor] as [number, number]);
+  return { rangeM, largest, x, y, points };
+}
+
+export function beamEnvelopeData(envelope: BeamEnvelope): ChartData {
+  const { x, y, points } = beamEnvelopePoints(envelope);
+  return { columns: [`Distance from the transmitter (${x.unit})`, `Beam 1/e² radius (${y.unit})`], rows: points };
+}
+
+export function beamEnvelopeOption(envelope: BeamEnvelope, mode: ChartMode): ChartOption {
+  const { rangeM, largest, x, y, points: upper } = beamEnvelopePoints(envelope);
   const text = CHART_TEXT[mode];
-  const upper = envelope.distanceM.map((distance, index) => [distance * x.factor, envelope.beamRadiusM[index]! * y.factor]);
   const lower = upper.map(([distance, radius]) => [distance!, -radius!]);
   const apertureRadius = envelope.receiveApertureRadiusM * y.factor;
   const markLines: unknown[] = [
@@ -191,9 +216,22 @@ export function beamEnvelopeOption(envelope: BeamEnvelope, mode: ChartMode): Cha
   };
 }
 
-export function marginVsRangeOption(sweep: RangeSweep, designRangeM: number, requiredMarginDb: number, mode: ChartMode): ChartOption {
-  const last = sweep.rangeM[sweep.rangeM.length - 1] ?? designRangeM;
+/** Margin against path length as plotted: path length in km (or m), margin in dB. */
+export function marginVsRangePoints(sweep: RangeSweep) {
+  const last = sweep.rangeM[sweep.rangeM.length - 1] ?? 0;
   const x = distanceAxis(last);
+  const points = sweep.rangeM.map((range, index) => [range * x.factor, sweep.linkMarginDb[index]!] as [number, number]);
+  return { last, x, points };
+}
+
+export function marginVsRangeData(sweep: RangeSweep): ChartData {
+  const { x, points } = marginVsRangePoints(sweep);
+  return { columns: [`Path length (${x.unit})`, 'Link margin (dB)', 'Verdict'], rows: points.map(([range, margin]) => [range, margin, marginWord(margin)]) };
+}
+
+export function marginVsRangeOption(sweep: RangeSweep, designRangeM: number, requiredMarginDb: number, mode: ChartMode): ChartOption {
+  const { x, points } = marginVsRangePoints(sweep);
+  const last = sweep.rangeM[sweep.rangeM.length - 1] ?? designRangeM;
   const text = CHART_TEXT[mode];
   // The axis always shows the failing region below 0 dB, shaded from the bottom of the axis.
   const lowest = Math.min(...sweep.linkMarginDb);
@@ -214,7 +252,7 @@ export function marginVsRangeOption(sweep: RangeSweep, designRangeM: number, req
         name: 'Link margin',
         type: 'line',
         showSymbol: false,
-        data: sweep.rangeM.map((range, index) => [range * x.factor, sweep.linkMarginDb[index]!]),
+        data: points,
         lineStyle: { color: '#0d7586', width: 2 },
         markLine: {
           symbol: 'none',
@@ -232,6 +270,20 @@ export function marginVsRangeOption(sweep: RangeSweep, designRangeM: number, req
         markArea: { silent: true, itemStyle: { color: beamPalette.poor, opacity: 0.08 }, data: [[{ yAxis: axisMin }, { yAxis: 0 }]] },
       },
     ],
+  };
+}
+
+/** Margin against visibility as plotted: visibility in km, margin in dB. */
+export function marginVsVisibilityPoints(sweep: VisibilitySweep): [number, number][] {
+  return sweep.visibilityM.map((visibility, index) => [visibility / 1000, sweep.linkMarginDb[index]!]);
+}
+
+export function marginVsVisibilityData(sweep: VisibilitySweep, bands: readonly { label: string; fromM: number; toM: number }[] = []): ChartData {
+  const bandOf = (visibilityKm: number) =>
+    bands.find((candidate) => visibilityKm * 1000 >= candidate.fromM && visibilityKm * 1000 < candidate.toM)?.label ?? '—';
+  return {
+    columns: ['Visibility (km)', 'Weather (visibility code)', 'Link margin (dB)', 'Verdict'],
+    rows: marginVsVisibilityPoints(sweep).map(([visibilityKm, margin]) => [visibilityKm, bandOf(visibilityKm), margin, marginWord(margin)]),
   };
 }
 
@@ -264,7 +316,7 @@ export function marginVsVisibilityOption(
         type: 'line',
         showSymbol: false,
         clip: true,
-        data: sweep.visibilityM.map((visibility, index) => [visibility / 1000, sweep.linkMarginDb[index]!]),
+        data: marginVsVisibilityPoints(sweep),
         lineStyle: { color: '#0d7586', width: 2 },
         markLine: {
           symbol: 'none',

@@ -7,7 +7,7 @@ import { formatDb, formatDbm, formatDistance, formatLength, formatPercent } from
 const useStyles = makeStyles({
   root: {
     display: 'grid',
-    gridTemplateColumns: 'minmax(260px, 1fr) minmax(0, 2fr)',
+    gridTemplateColumns: 'minmax(min(260px, 100%), 1fr) minmax(0, 2fr)',
     columnGap: tokens.spacingHorizontalL,
     rowGap: tokens.spacingVerticalM,
     alignItems: 'stretch',
@@ -44,7 +44,13 @@ const useStyles = makeStyles({
   },
   statValue: { fontSize: tokens.fontSizeBase500, fontWeight: tokens.fontWeightSemibold, fontVariantNumeric: 'tabular-nums' },
   statNote: { color: tokens.colorNeutralForeground3 },
-  stale: { opacity: 0.55 },
+  // Stale figures keep their full contrast (dimming them would make them unreadable): a dashed
+  // outline and the words "last valid design" mark them instead.
+  stale: {
+    outline: `2px dashed ${tokens.colorPaletteMarigoldBorderActive}`,
+    outlineOffset: '4px',
+    borderRadius: tokens.borderRadiusLarge,
+  },
 });
 
 export interface BudgetHeadlineProps {
@@ -82,9 +88,16 @@ export function BudgetHeadline({ budget, maxRange, requiredMarginDb, stale }: Bu
           : formatDistance(maxRange.rangeM);
 
   return (
-    <div className={mergeClasses(styles.root, stale && styles.stale)} aria-live="polite">
-      <div className={mergeClasses(styles.margin, styles[verdict])} data-verdict={verdict}>
-        <span className={styles.marginLabel}>Link margin</span>
+    <div className={mergeClasses(styles.root, stale && styles.stale)}>
+      {/* A polite live region: a screen reader reads the new margin and verdict once typing pauses. */}
+      <div
+        className={mergeClasses(styles.margin, styles[verdict])}
+        data-verdict={verdict}
+        aria-live="polite"
+        aria-atomic="true"
+        data-testid="margin-headline"
+      >
+        <span className={styles.marginLabel}>Link margin{stale ? ' (last valid design)' : ''}</span>
         <span className={styles.marginValue} data-testid="link-margin">
           {formatDb(budget.linkMarginDb, { digits: 2, signed: true })}
         </span>
@@ -92,7 +105,7 @@ export function BudgetHeadline({ budget, maxRange, requiredMarginDb, stale }: Bu
           relationship="description"
           content={`Fails below 0 dB; thin below ${THIN_MARGIN_DB} dB (common practice). Margin = received power − sensitivity − fade margin − allowance.`}
         >
-          <span className={styles.verdict}>
+          <span className={styles.verdict} data-testid="margin-verdict">
             <Icon className={styles[`verdictIcon${verdict}`]} aria-hidden />
             {MARGIN_VERDICT_TEXT[verdict]}
             {verdict === 'fails' ? ': the link does not close' : verdict === 'thin' ? ': little left for the unexpected' : ' for the design weather'}

@@ -1,5 +1,20 @@
 import { useMemo, type ReactNode } from 'react';
-import { Caption1, Subtitle2, makeStyles, tokens } from '@fluentui/react-components';
+import {
+  Accordion,
+  AccordionHeader,
+  AccordionItem,
+  AccordionPanel,
+  Caption1,
+  Subtitle2,
+  Table,
+  TableBody,
+  TableCell,
+  TableHeader,
+  TableHeaderCell,
+  TableRow,
+  makeStyles,
+  tokens,
+} from '@fluentui/react-components';
 import {
   beamEnvelope,
   marginVsRange,
@@ -11,15 +26,20 @@ import { LazyEChart } from '@/components/charts/lazy-echart';
 import { useThemeMode } from '@/lib/theme';
 import { formatDistance, formatLength } from '@/lib/format';
 import {
+  beamEnvelopeData,
   beamEnvelopeOption,
+  marginVsRangeData,
   marginVsRangeOption,
+  marginVsVisibilityData,
   marginVsVisibilityOption,
   waterfallOption,
+  type ChartData,
 } from '@/features/link-design/charts/chart-options';
 import { VISIBILITY_BANDS } from '@/features/link-design/charts/visibility-bands';
 
 const useStyles = makeStyles({
-  grid: { display: 'grid', gridTemplateColumns: 'repeat(auto-fit, minmax(440px, 1fr))', gap: tokens.spacingHorizontalL },
+  // min(…, 100%): on a narrow screen the cards stack and shrink instead of overflowing
+  grid: { display: 'grid', gridTemplateColumns: 'repeat(auto-fit, minmax(min(440px, 100%), 1fr))', gap: tokens.spacingHorizontalL },
   card: {
     backgroundColor: tokens.colorNeutralBackground1,
     border: `1px solid ${tokens.colorNeutralStroke2}`,
@@ -30,15 +50,63 @@ const useStyles = makeStyles({
     minWidth: 0,
   },
   caption: { color: tokens.colorNeutralForeground3 },
+  tableScroll: { maxHeight: '320px', overflowY: 'auto', overflowX: 'auto' },
+  number: { fontVariantNumeric: 'tabular-nums', textAlign: 'end' },
 });
 
-function ChartCard({ title, caption, children }: { title: string; caption: ReactNode; children: ReactNode }) {
+/** A plotted number as the table shows it: four significant figures, a true minus sign. */
+export function formatPlottedValue(value: number | string): string {
+  if (typeof value === 'string') return value;
+  if (!Number.isFinite(value)) return '—';
+  const text = String(Number(value.toPrecision(4)));
+  return text.startsWith('-') ? `\u2212${text.slice(1)}` : text;
+}
+
+/** The chart's values as a table, for screen readers and for anyone who wants the numbers. */
+function ChartValuesTable({ title, data, testId }: { title: string; data: ChartData; testId: string }) {
+  const styles = useStyles();
+  return (
+    <Accordion collapsible>
+      <AccordionItem value="table">
+        <AccordionHeader size="small">Show the values as a table ({data.rows.length} rows)</AccordionHeader>
+        <AccordionPanel>
+          {/* focusable so that keyboard users can scroll it (WCAG 2.1.1) */}
+          <div className={styles.tableScroll} tabIndex={0} role="region" aria-label={`${title}: values`}>
+            <Table size="extra-small" aria-label={`${title}: the values plotted`} data-testid={`${testId}-table`}>
+              <TableHeader>
+                <TableRow>
+                  {data.columns.map((column) => (
+                    <TableHeaderCell key={column}>{column}</TableHeaderCell>
+                  ))}
+                </TableRow>
+              </TableHeader>
+              <TableBody>
+                {data.rows.map((row, rowIndex) => (
+                  <TableRow key={rowIndex}>
+                    {row.map((cell, cellIndex) => (
+                      <TableCell key={cellIndex} className={typeof cell === 'number' ? styles.number : undefined}>
+                        {formatPlottedValue(cell)}
+                      </TableCell>
+                    ))}
+                  </TableRow>
+                ))}
+              </TableBody>
+            </Table>
+          </div>
+        </AccordionPanel>
+      </AccordionItem>
+    </Accordion>
+  );
+}
+
+function ChartCard({ title, caption, children, data, testId }: { title: string; caption: ReactNode; children: ReactNode; data?: ChartData; testId?: string }) {
   const styles = useStyles();
   return (
     <section className={styles.card} aria-label={title}>
       <Subtitle2 as="h3">{title}</Subtitle2>
       {children}
       <Caption1 className={styles.caption}>{caption}</Caption1>
+      {data && testId && <ChartValuesTable title={title} data={data} testId={testId} />}
     </section>
   );
 }
@@ -47,7 +115,7 @@ export function BudgetWaterfall({ budget }: { budget: LinkBudget }) {
   const [mode] = useThemeMode();
   const option = useMemo(() => waterfallOption(budget, mode), [budget, mode]);
   return (
-    <ChartCard title="From transmit power to margin" caption="Each bar is one term of the budget in dBm; the last bar is the margin above the receiver sensitivity (dashed line).">
+    <ChartCard title="From transmit power to margin" caption="Each bar is one term of the budget in dBm; the last bar is the margin above the receiver sensitivity (dashed line). The link budget table lists the same terms with their values.">
       <LazyEChart option={option} ariaLabel="Waterfall of the link budget from transmit power to link margin" height={300} testId="chart-waterfall" />
     </ChartCard>
   );
@@ -74,6 +142,15 @@ export function DesignCharts({ design, budget, requiredMarginDb }: DesignChartsP
       return null;
     }
   }, [design]);
+  const tables = useMemo(
+    () =>
+      series && {
+        envelope: beamEnvelopeData(series.envelope),
+        range: marginVsRangeData(series.range),
+        visibility: marginVsVisibilityData(series.visibility, VISIBILITY_BANDS),
+      },
+    [series],
+  );
   const options = useMemo(
     () =>
       series && {
@@ -83,7 +160,7 @@ export function DesignCharts({ design, budget, requiredMarginDb }: DesignChartsP
       },
     [series, mode, design, requiredMarginDb],
   );
-  if (!series || !options) return null;
+  if (!series || !options || !tables) return null;
   const { envelope } = series;
   const rayleighText = envelope.rayleighRangeEndWithinPath
     ? `The dashed line marks where the Rayleigh range ends (${formatDistance(envelope.rayleighRangeEndM)} from the transmitter); beyond it the beam widens almost linearly with distance.`
@@ -96,15 +173,24 @@ export function DesignCharts({ design, budget, requiredMarginDb }: DesignChartsP
       <ChartCard
         title="Beam along the path"
         caption={`${rayleighText} Receive aperture radius ${formatLength(envelope.receiveApertureRadiusM)}; beam 1/e² radius at the receiver ${formatLength(budget.beamRadiusAtReceiverM)}.`}
+        data={tables.envelope}
+        testId="chart-beam"
       >
         <LazyEChart option={options.envelope} ariaLabel="Beam radius along the path against the receive aperture" testId="chart-beam" />
       </ChartCard>
-      <ChartCard title="Margin against path length" caption="Everything but the path length as designed. The shaded band is where the link fails.">
+      <ChartCard
+        title="Margin against path length"
+        caption="Everything but the path length as designed. The shaded band is where the link fails."
+        data={tables.range}
+        testId="chart-range"
+      >
         <LazyEChart option={options.range} ariaLabel="Link margin against path length" testId="chart-range" />
       </ChartCard>
       <ChartCard
         title="Margin against visibility"
         caption="Everything but the visibility as designed, in the visibility definition chosen. Bands: international visibility code."
+        data={tables.visibility}
+        testId="chart-visibility"
       >
         <LazyEChart option={options.visibility} ariaLabel="Link margin against visibility" testId="chart-visibility" />
       </ChartCard>

@@ -55,8 +55,10 @@ const useStyles = makeStyles({
     alignItems: 'start',
   },
   wide: { gridColumn: '1 / -1' },
-  row: { display: 'grid', gridTemplateColumns: 'minmax(110px, 1fr) auto auto', columnGap: tokens.spacingHorizontalS },
+  // value, then its definition pickers; they wrap under the value when the column is narrow
+  row: { display: 'flex', flexWrap: 'wrap', columnGap: tokens.spacingHorizontalS, rowGap: tokens.spacingVerticalXS },
   input: { fontVariantNumeric: 'tabular-nums' },
+  rowInput: { flexGrow: 1, flexBasis: '110px', minWidth: 0 },
   edited: { color: tokens.colorPaletteMarigoldForeground1, verticalAlign: 'middle' },
   note: { color: tokens.colorNeutralForeground3 },
 });
@@ -112,7 +114,7 @@ function QuantityInput({
   const error = errors[id];
   const input = (
     <Input
-      className={styles.input}
+      className={mergeClasses(styles.input, extra ? styles.rowInput : undefined)}
       name={id}
       value={draft.text[id]}
       placeholder={`e.g. ${field.example}`}

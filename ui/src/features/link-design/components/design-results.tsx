@@ -9,7 +9,7 @@ import { EyeSafetyPanel } from '@/features/link-design/components/eye-safety-pan
 
 const useStyles = makeStyles({
   root: { display: 'grid', rowGap: tokens.spacingVerticalL, minWidth: 0 },
-  split: { display: 'grid', gridTemplateColumns: 'repeat(auto-fit, minmax(440px, 1fr))', gap: tokens.spacingHorizontalL, alignItems: 'start' },
+  split: { display: 'grid', gridTemplateColumns: 'repeat(auto-fit, minmax(min(440px, 100%), 1fr))', gap: tokens.spacingHorizontalL, alignItems: 'start' },
   // the margin stays in view while the engineer scrolls through the form
   sticky: {
     position: 'sticky',
@@ -17,6 +17,8 @@ const useStyles = makeStyles({
     zIndex: 2,
     paddingBlock: tokens.spacingVerticalS,
     backgroundColor: tokens.colorNeutralBackground2,
+    // on a phone the headline would cover most of the screen: it scrolls with the page there
+    '@media (max-width: 700px)': { position: 'static' },
   },
   card: {
     backgroundColor: tokens.colorNeutralBackground1,

@@ -13,7 +13,7 @@ import {
   makeStyles,
   tokens,
 } from '@fluentui/react-components';
-import { EyeTrackingRegular } from '@fluentui/react-icons';
+import { EyeTrackingRegular, ShieldCheckmarkRegular, WarningRegular } from '@fluentui/react-icons';
 import { assessEyeSafety, dbmToWatts, type EyeSafetyAssessment, type LinkBudget, type LinkDesignInput } from '@beamwright/link-core';
 import { formatDistance, formatPowerW } from '@/lib/format';
 
@@ -30,7 +30,7 @@ const useStyles = makeStyles({
     backgroundColor: tokens.colorNeutralBackground1,
     border: `1px solid ${tokens.colorNeutralStroke2}`,
   },
-  heading: { display: 'flex', alignItems: 'center', columnGap: tokens.spacingHorizontalS },
+  heading: { display: 'flex', flexWrap: 'wrap', alignItems: 'center', columnGap: tokens.spacingHorizontalS, rowGap: tokens.spacingVerticalXS },
   number: { textAlign: 'end', fontVariantNumeric: 'tabular-nums' },
   notes: { margin: 0, paddingInlineStart: tokens.spacingHorizontalL, color: tokens.colorNeutralForeground2 },
 });
@@ -62,10 +62,26 @@ const CLASS_COLOUR: Record<string, 'success' | 'warning' | 'danger' | 'severe'> 
   '4': 'danger',
 };
 
+/** A few words on what the indicative class means, so the badge never relies on its colour. */
+export const CLASS_MEANING: Record<string, string> = {
+  '1': 'no hazard expected in normal use',
+  '1M': 'hazard through binoculars or telescopes',
+  '3R': 'low hazard to the naked eye',
+  '3B': 'hazard to the naked eye',
+  '4': 'hazard to eyes and skin',
+};
+
 export function IndicativeClassBadge({ assessment }: { assessment: EyeSafetyAssessment }) {
+  const meaning = CLASS_MEANING[assessment.indicativeClass];
   return (
-    <Badge appearance="tint" color={CLASS_COLOUR[assessment.indicativeClass] ?? 'informative'} data-testid="laser-class">
+    <Badge
+      appearance="tint"
+      color={CLASS_COLOUR[assessment.indicativeClass] ?? 'informative'}
+      icon={assessment.indicativeClass === '1' ? <ShieldCheckmarkRegular /> : <WarningRegular />}
+      data-testid="laser-class"
+    >
       Indicative Class {assessment.indicativeClass}
+      {meaning ? ` · ${meaning}` : ''}
     </Badge>
   );
 }

@@ -16,7 +16,7 @@ const useStyles = makeStyles({
   titleRow: { display: 'flex', alignItems: 'center', columnGap: tokens.spacingHorizontalM, flexWrap: 'wrap' },
   meta: { color: tokens.colorNeutralForeground3 },
   warning: { color: tokens.colorPaletteRedForeground1, margin: 0, maxWidth: '70ch' },
-  actions: { display: 'flex', columnGap: tokens.spacingHorizontalS, flexWrap: 'wrap' },
+  actions: { display: 'flex', columnGap: tokens.spacingHorizontalS, rowGap: tokens.spacingVerticalS, flexWrap: 'wrap' },
 });
 
 export function LinkHeader({ link, section, actions }: { link: LinkDetail; section?: string; actions?: ReactNode }) {

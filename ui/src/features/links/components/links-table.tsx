@@ -7,9 +7,9 @@ import {
   DataGridHeader,
   DataGridHeaderCell,
   DataGridRow,
-  Link,
   Text,
   Tooltip,
+  createFocusOutlineStyle,
   createTableColumn,
   makeStyles,
   tokens,
@@ -26,7 +26,22 @@ import type { LinkSummary } from '@/features/links/api/types';
 import type { LinkSortField } from '@/features/links/api/get-links';
 
 const useStyles = makeStyles({
-  name: { fontWeight: tokens.fontWeightSemibold },
+  // A plain link, the cell's only focus stop; at least 24 × 24 CSS px to click or tap (WCAG 2.2 target size).
+  name: {
+    display: 'inline-flex',
+    // Fluent draws the focus ring as an ::after box around a positioned element
+    position: 'relative',
+    alignItems: 'center',
+    alignSelf: 'flex-start',
+    minHeight: '28px',
+    minWidth: '24px',
+    fontWeight: tokens.fontWeightSemibold,
+    color: tokens.colorBrandForegroundLink,
+    textDecorationLine: 'none',
+    borderRadius: tokens.borderRadiusSmall,
+    ':hover': { color: tokens.colorBrandForegroundLinkHover, textDecorationLine: 'underline' },
+    ...createFocusOutlineStyle(),
+  },
   sites: { color: tokens.colorNeutralForeground3, fontSize: tokens.fontSizeBase200 },
   nameCell: { display: 'flex', flexDirection: 'column', paddingBlock: tokens.spacingVerticalS },
   status: { display: 'flex', flexWrap: 'wrap', gap: tokens.spacingHorizontalXS, paddingBlock: tokens.spacingVerticalXS },
@@ -50,11 +65,9 @@ export function LinksTable({ links, sort, onSortChange }: LinksTableProps) {
         renderHeaderCell: () => 'Link',
         renderCell: (link) => (
           <div className={styles.nameCell}>
-            <Link as="span" className={styles.name}>
-              <RouterLink to={paths.app.link.getHref(link.id)} style={{ color: 'inherit', textDecoration: 'inherit' }}>
-                {link.name}
-              </RouterLink>
-            </Link>
+            <RouterLink to={paths.app.link.getHref(link.id)} className={styles.name} data-testid="link-name">
+              {link.name}
+            </RouterLink>
             {(link.siteA || link.siteB) && (
               <span className={styles.sites}>
                 {link.siteA?.name ?? '—'} ↔ {link.siteB?.name ?? '—'}
@@ -139,7 +152,8 @@ export function LinksTable({ links, sort, onSortChange }: LinksTableProps) {
       <DataGridBody<LinkSummary>>
         {({ item, rowId }) => (
           <DataGridRow<LinkSummary> key={rowId} data-link-id={item.id}>
-            {({ renderCell }) => <DataGridCell>{renderCell(item)}</DataGridCell>}
+            {/* The name cell is not a focus stop of its own: arrow keys land on its link directly. */}
+            {({ renderCell, columnId }) => <DataGridCell focusMode={columnId === 'name' ? 'none' : 'cell'}>{renderCell(item)}</DataGridCell>}
           </DataGridRow>
         )}
       </DataGridBody>

@@ -1,4 +1,4 @@
-import { useState, type ReactElement } from 'react';
+import { useRef, useState, type ReactElement } from 'react';
 import {
   Body1,
   Button,
@@ -13,6 +13,7 @@ import {
   MessageBarBody,
   Spinner,
   Textarea,
+  createFocusOutlineStyle,
   makeStyles,
   tokens,
 } from '@fluentui/react-components';
@@ -23,7 +24,25 @@ import { useActOnRevision } from '@/features/reviews/api/act-on-revision';
 const useStyles = makeStyles({
   bar: { display: 'flex', flexWrap: 'wrap', columnGap: tokens.spacingHorizontalS, rowGap: tokens.spacingVerticalS },
   dialog: { display: 'grid', rowGap: tokens.spacingVerticalM },
+  outcome: {
+    display: 'inline-block',
+    // Fluent draws the focus ring as an ::after box around a positioned element
+    position: 'relative',
+    fontSize: tokens.fontSizeBase300,
+    lineHeight: tokens.lineHeightBase300,
+    fontWeight: tokens.fontWeightSemibold,
+    borderRadius: tokens.borderRadiusSmall,
+    ...createFocusOutlineStyle(),
+  },
 });
+
+/** What a screen reader hears (and everyone reads) once an action went through. */
+const OUTCOME_TEXT: Record<ReviewAction, (revision: number) => string> = {
+  submit: (revision) => `Revision ${revision} submitted for review.`,
+  approve: (revision) => `Revision ${revision} approved.`,
+  return: (revision) => `Revision ${revision} returned to the engineer.`,
+  install: (revision) => `Revision ${revision} recorded as installed.`,
+};
 
 interface ActionSpec {
   action: ReviewAction;
@@ -71,8 +90,11 @@ export function ReviewActions({
   const [comment, setComment] = useState('');
   const [commentError, setCommentError] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
+  const [outcome, setOutcome] = useState<string | null>(null);
+  const outcomeRef = useRef<HTMLSpanElement>(null);
+  // The button that opened the dialog is usually gone once the status moves on: focus goes to the outcome instead.
+  const focusOutcomeAfterClose = useRef(false);
   const actions = archived ? [] : actionsFor(role, status, isAuthor);
-  if (actions.length === 0) return null;
 
   const submit = () => {
     if (!open) return;
@@ -85,6 +107,8 @@ export function ReviewActions({
       { revision, action: open.action, comment: comment.trim() },
       {
         onSuccess: () => {
+          focusOutcomeAfterClose.current = true;
+          setOutcome(OUTCOME_TEXT[open.action](revision));
           setOpen(null);
           setComment('');
         },
@@ -99,23 +123,43 @@ export function ReviewActions({
 
   return (
     <>
-      <div className={styles.bar} data-testid="review-actions">
-        {actions.map((spec) => (
-          <Button
-            key={spec.action}
-            appearance={spec.appearance}
-            icon={spec.icon}
-            onClick={() => {
-              setOpen(spec);
-              setCommentError(null);
-              setError(null);
-            }}
-          >
-            {spec.label}
-          </Button>
-        ))}
+      <div role="status" aria-live="polite" data-testid="review-outcome">
+        {outcome && (
+          <span ref={outcomeRef} tabIndex={-1} className={styles.outcome}>
+            {outcome}
+          </span>
+        )}
       </div>
-      <Dialog open={open !== null} onOpenChange={(_, data) => !data.open && setOpen(null)}>
+      {actions.length > 0 && (
+        <div className={styles.bar} data-testid="review-actions">
+          {actions.map((spec) => (
+            <Button
+              key={spec.action}
+              appearance={spec.appearance}
+              icon={spec.icon}
+              onClick={() => {
+                setOpen(spec);
+                setOutcome(null);
+                setCommentError(null);
+                setError(null);
+              }}
+            >
+              {spec.label}
+            </Button>
+          ))}
+        </div>
+      )}
+      <Dialog
+        open={open !== null}
+        onOpenChange={(_, data) => !data.open && setOpen(null)}
+        surfaceMotion={{
+          onMotionFinish: (_, data) => {
+            if (data.direction !== 'exit' || !focusOutcomeAfterClose.current) return;
+            focusOutcomeAfterClose.current = false;
+            outcomeRef.current?.focus();
+          },
+        }}
+      >
         <DialogSurface>
           <DialogBody>
             <DialogTitle>
