@@ -94,6 +94,7 @@ export type { LaserSafetyEdition, LaserSafetyEditionInput, OcularMpeInput, Ocula
 export { BINOCULAR_7X50_GAIN, viewingOpticsGain, nohdM, nohdFarFieldM, exitPeakIrradianceWPerM2 } from './safety/hazard-distance.js';
 export type { NohdInput } from './safety/hazard-distance.js';
 export { accessiblePowerW, measurementConditions, indicativeLaserClass, assessEyeSafety } from './safety/classification.js';
+export { eyeSafetyInputOf } from './safety/eye-safety-input.js';
 export type { BeamGrowthModel, AccessiblePowerInput, MeasurementCondition, IndicativeLaserClass, LaserClassInput, LaserClassIndication, EyeSafetyInput, EyeSafetyAssessment } from './safety/classification.js';
 
 // Site geometry (METHODS.md §9)

@@ -20,6 +20,7 @@ import { postgresErrorCode, UNIQUE_VIOLATION } from '../common/database-errors.j
 import type { Site } from '../sites/site.entity.js';
 import { SitesService, type SiteGeometryChange } from '../sites/sites.service.js';
 import { computeBudget } from './link-budget.js';
+import { latestRevisionColumns } from './latest-revision-columns.js';
 import { approvalFrom, toLinkDetail, toLinkSummary, toRevision, toRevisionSummary } from './link.mapper.js';
 import { LinkReview } from './link-review.entity.js';
 import { LinkRevision } from './link-revision.entity.js';
@@ -124,10 +125,7 @@ export class LinksService implements OnModuleInit {
           siteAId: input.siteAId ?? null,
           siteBId: input.siteBId ?? null,
           latestRevision: 1,
-          latestLinkMarginDb: budget.linkMarginDb,
-          latestReceivedPowerDbm: budget.receivedPowerDbm,
-          latestRangeM: input.design.rangeM,
-          latestWavelengthM: input.design.transmitter.wavelengthM,
+          ...latestRevisionColumns(input.design, budget),
         }),
       );
       await manager.insert(LinkRevision, {
@@ -276,10 +274,7 @@ export class LinksService implements OnModuleInit {
           .set({
             latestRevision: () => 'latest_revision + 1',
             status: 'draft',
-            latestLinkMarginDb: budget.linkMarginDb,
-            latestReceivedPowerDbm: budget.receivedPowerDbm,
-            latestRangeM: input.design.rangeM,
-            latestWavelengthM: input.design.transmitter.wavelengthM,
+            ...latestRevisionColumns(input.design, budget),
           })
           .where('id = :id AND organisation_id = :organisationId AND latest_revision = :base', {
             id,

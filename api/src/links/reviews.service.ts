@@ -1,19 +1,12 @@
 import { ConflictException, ForbiddenException, Injectable } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import { DataSource, Repository } from 'typeorm';
-import { REVIEW_TRANSITIONS, reviewActionRefusal, rolesFor, type LinkStatus, type ReviewAction, type ReviewActionResponse, type ReviewListResponse } from '@beamwright/link-core/contracts';
+import { LINK_STATUS_PHRASES, REVIEW_TRANSITIONS, reviewActionRefusal, rolesFor, type ReviewAction, type ReviewActionResponse, type ReviewListResponse } from '@beamwright/link-core/contracts';
 import type { AuthUser } from '../common/auth-user.js';
 import { toReviewEntry } from './link.mapper.js';
 import { LinkReview } from './link-review.entity.js';
 import { Link } from './link.entity.js';
 import { LinksService } from './links.service.js';
-
-const STATUS_WORDS: Record<LinkStatus, string> = {
-  draft: 'a draft',
-  in_review: 'in review',
-  approved: 'approved',
-  installed: 'installed',
-};
 
 @Injectable()
 export class ReviewsService {
@@ -67,7 +60,7 @@ export class ReviewsService {
         throw new ConflictException(
           current.latestRevision !== revisionNumber
             ? `Revision ${revisionNumber} is no longer the latest (${current.latestRevision})`
-            : `The link is ${STATUS_WORDS[current.status]}; only a link that is ${STATUS_WORDS[transition.from]} can be ${transition.verb}`,
+            : `The link is ${LINK_STATUS_PHRASES[current.status]}; only a link that is ${LINK_STATUS_PHRASES[transition.from]} can be ${transition.verb}`,
         );
       }
       const inserted = await manager.insert(LinkReview, {

@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { formatZodIssues } from '../schemas/format-zod-issues.js';
+import { LINK_STATUS_LABELS, LINK_STATUS_PHRASES, LINK_STATUSES } from './links.contract.js';
+import { siteTerminalHeightM, siteTerminalOf } from './sites.contract.js';
 import {
   CreateEquipmentRequestSchema,
   CreateLinkRequestSchema,
@@ -88,5 +90,23 @@ describe('text fields of the contracts', () => {
       const composed = schema.parse({ ...body, [field]: 'Cafe\u0301' }) as Record<string, unknown>;
       expect(composed[field]).toBe('Caf\u00e9');
     }
+  });
+});
+
+describe('shared display and site rules', () => {
+  it('names every link status once, as a label and inside a sentence', () => {
+    expect(LINK_STATUSES.map((status) => LINK_STATUS_LABELS[status])).toEqual(['Draft', 'In review', 'Approved', 'Installed']);
+    expect(LINK_STATUSES.map((status) => `The link is ${LINK_STATUS_PHRASES[status]}`)).toEqual([
+      'The link is a draft',
+      'The link is in review',
+      'The link is approved',
+      'The link is installed',
+    ]);
+  });
+
+  it("puts a site's terminal at its ground elevation plus its mount height", () => {
+    const site = { latitudeDeg: 51.5, longitudeDeg: -0.12, groundElevationM: 42.5, mountHeightM: 3.2 };
+    expect(siteTerminalHeightM(site)).toBeCloseTo(45.7, 12);
+    expect(siteTerminalOf(site)).toEqual({ latDeg: 51.5, lonDeg: -0.12, heightM: siteTerminalHeightM(site) });
   });
 });

@@ -14,6 +14,10 @@ import { IsoDateTimeSchema, pageOf, queryInteger, textField } from './common.con
 export const LINK_STATUSES = ['draft', 'in_review', 'approved', 'installed'] as const;
 export const LinkStatusSchema = z.enum(LINK_STATUSES, { error: `must be one of ${LINK_STATUSES.join(', ')}` });
 export type LinkStatus = z.infer<typeof LinkStatusSchema>;
+/** Each status as a label on screen: badges, filters, tables. */
+export const LINK_STATUS_LABELS: Record<LinkStatus, string> = { draft: 'Draft', in_review: 'In review', approved: 'Approved', installed: 'Installed' };
+/** Each status inside a sentence: "The link is in review", "only a link that is a draft …". */
+export const LINK_STATUS_PHRASES: Record<LinkStatus, string> = { draft: 'a draft', in_review: 'in review', approved: 'approved', installed: 'installed' };
 
 const optionalSiteId = z.uuid({ error: 'must be a site id (UUID)' }).nullable().optional();
 

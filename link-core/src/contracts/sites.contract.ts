@@ -41,5 +41,19 @@ export const SiteResponseSchema = z.object({
 });
 export type SiteResponse = z.infer<typeof SiteResponseSchema>;
 
+/**
+ * Height of a site's terminal above sea level [m]: the ground elevation plus the mount height
+ * (both metres; the mount height is the aperture's height above the ground or roof the site's
+ * ground elevation names). One rule for the path geometry, the link sheet and the site plan.
+ */
+export function siteTerminalHeightM(site: Pick<SiteResponse, 'groundElevationM' | 'mountHeightM'>): number {
+  return site.groundElevationM + site.mountHeightM;
+}
+
+/** A site as one end of link-core's `linkGeometry` (latitude and longitude in degrees, height in metres). */
+export function siteTerminalOf(site: Pick<SiteResponse, 'latitudeDeg' | 'longitudeDeg' | 'groundElevationM' | 'mountHeightM'>): { latDeg: number; lonDeg: number; heightM: number } {
+  return { latDeg: site.latitudeDeg, lonDeg: site.longitudeDeg, heightM: siteTerminalHeightM(site) };
+}
+
 export const SiteListResponseSchema = z.object({ items: z.array(SiteResponseSchema) });
 export type SiteListResponse = z.infer<typeof SiteListResponseSchema>;

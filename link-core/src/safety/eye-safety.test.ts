@@ -2,6 +2,9 @@ import { describe, expect, it } from 'vitest';
 import { accessiblePowerW, assessEyeSafety, indicativeLaserClass } from './classification.js';
 import { classOneAelW, ocularMpeDetails, ocularMpeWPerM2 } from './exposure-limits.js';
 import { BINOCULAR_7X50_GAIN, nohdFarFieldM, nohdM } from './hazard-distance.js';
+import { eyeSafetyInputOf } from './eye-safety-input.js';
+import { evaluateLink } from '../budget/evaluate-link.js';
+import type { LinkDesignInput } from '../schemas/link-design.schema.js';
 
 describe('ocular MPE (IEC 60825-1 Table A.1 / ANSI Z136.1 Table 5a, from memory)', () => {
   it('14.79 W/m² at 785 nm, 19.95 W/m² at 850 nm, 1000 W/m² at 1550 nm for t ≥ 10 s', () => {
@@ -88,5 +91,37 @@ describe('indicative class and assessment', () => {
     expect(result.nohdUnaidedM).toBe(0);
     expect(result.nohdWithOpticsM).toBeGreaterThan(90);
     expect(result.notes.join(' ')).toMatch(/binoculars/);
+  });
+});
+
+describe('eyeSafetyInputOf (the one rule that turns a design into an eye-safety input)', () => {
+  // the LB-01 worked budget's transmitter, with a 10 mm exit beam
+  const design: LinkDesignInput = {
+    rangeM: 2000,
+    transmitter: { wavelengthM: 1550e-9, powerDbm: 20, waistRadiusM: 0.01, halfAngleDivergenceRad: 1e-3, opticsLossDb: 1 },
+    receiver: { apertureDiameterM: 0.1, sensitivityDbm: -36, opticsLossDb: 1.5 },
+    pointing: { jitterSigmaPerAxisRad: 50e-6, staticErrorRad: 100e-6 },
+    atmosphere: { model: 'kim', visibilityM: 5000, cn2: 5e-14 },
+    scintillation: { include: true, probability: 1e-3 },
+  };
+
+  it('takes the power in watts (20 dBm = 0.1 W), the wavelength and the exit beam radius from the transmitter', () => {
+    const input = eyeSafetyInputOf(design);
+    expect(input.powerW).toBeCloseTo(0.1, 12);
+    expect(input.wavelengthM).toBe(1550e-9);
+    expect(input.apertureBeamRadiusM).toBe(0.01);
+  });
+
+  it("prefers the budget's half angle (never below the diffraction limit), then the datasheet's, then a collimated beam", () => {
+    expect(eyeSafetyInputOf(design, { halfAngleDivergenceRad: 2e-3 }).halfAngleDivergenceRad).toBe(2e-3);
+    expect(eyeSafetyInputOf(design, null).halfAngleDivergenceRad).toBe(1e-3);
+    const withoutDivergence = { ...design, transmitter: { ...design.transmitter, halfAngleDivergenceRad: undefined } };
+    expect(eyeSafetyInputOf(withoutDivergence).halfAngleDivergenceRad).toBe(0);
+  });
+
+  it('is what assessEyeSafety needs for a design and its budget', () => {
+    const budget = evaluateLink(design);
+    const assessment = assessEyeSafety(eyeSafetyInputOf(design, budget));
+    expect(assessment.caution).toMatch(/laser safety officer/i);
   });
 });

@@ -4,6 +4,7 @@ import { isAllowed, REVIEW_TRANSITIONS, type LinkStatus, type PermissionAction, 
 import { Link } from '../../links/link.entity.js';
 import { LinkReview } from '../../links/link-review.entity.js';
 import { LinkRevision } from '../../links/link-revision.entity.js';
+import { latestRevisionColumns } from '../../links/latest-revision-columns.js';
 import type { LinkFixture } from './demo-fixtures.js';
 
 const DAY_MS = 86_400_000;
@@ -70,12 +71,7 @@ export async function seedDemoLink(
       }
       design = parsed.data;
       const budget = evaluateLink(design);
-      const latest = {
-        latestLinkMarginDb: budget.linkMarginDb,
-        latestReceivedPowerDbm: budget.receivedPowerDbm,
-        latestRangeM: design.rangeM,
-        latestWavelengthM: design.transmitter.wavelengthM,
-      };
+      const latest = latestRevisionColumns(design, budget);
       if (!link) {
         link = await manager.save(
           manager.create(Link, {

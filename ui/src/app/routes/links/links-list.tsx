@@ -25,15 +25,13 @@ import { policies, useCurrentUser } from '@/lib/auth';
 import { useLinks, type LinkSortField, type LinksQuery } from '@/features/links/api/get-links';
 import { LinksTable } from '@/features/links/components/links-table';
 import type { LinkStatus } from '@/features/links/api/types';
+import { LINK_STATUS_LABELS, LINK_STATUSES } from '@beamwright/link-core/contracts';
 
 const PAGE_SIZE = 20;
 const SORT_FIELDS: readonly LinkSortField[] = ['name', 'status', 'linkMarginDb', 'rangeM', 'wavelengthM', 'updatedAt'];
 const STATUS_OPTIONS: { value: LinkStatus | ''; label: string }[] = [
   { value: '', label: 'Any status' },
-  { value: 'draft', label: 'Draft' },
-  { value: 'in_review', label: 'In review' },
-  { value: 'approved', label: 'Approved' },
-  { value: 'installed', label: 'Installed' },
+  ...LINK_STATUSES.map((status) => ({ value: status, label: LINK_STATUS_LABELS[status] })),
 ];
 
 const useStyles = makeStyles({

@@ -1,4 +1,4 @@
-import { useMemo, useState, type FormEvent } from 'react';
+import { useState, type FormEvent } from 'react';
 import { Navigate, useNavigate } from 'react-router-dom';
 import {
   Body1,
@@ -15,7 +15,6 @@ import {
   makeStyles,
   tokens,
 } from '@fluentui/react-components';
-import { linkGeometry } from '@beamwright/link-core';
 import { parseQuantity } from '@beamwright/link-core/units';
 import { paths } from '@/config/paths';
 import { policies, useCurrentUser } from '@/lib/auth';
@@ -23,6 +22,7 @@ import { isApiError } from '@/lib/api-client';
 import { formatDistance } from '@/lib/format';
 import { useCreateLink } from '@/features/links/api/create-link';
 import { useSites } from '@/features/sites/api/get-sites';
+import { useSitePathGeometry } from '@/features/sites/hooks/use-site-path-geometry';
 import { starterDesign } from '@/features/link-design/starter-design';
 
 const useStyles = makeStyles({
@@ -49,19 +49,7 @@ export function NewLinkRoute() {
   const clearSiteErrors = () => setErrors((current) => ({ ...current, siteAId: undefined, siteBId: undefined, rangeM: undefined }));
 
   // With both ends chosen, the path length follows from their coordinates and heights.
-  const geometry = useMemo(() => {
-    const a = sites.data?.find((site) => site.id === siteAId);
-    const b = sites.data?.find((site) => site.id === siteBId);
-    if (!a || !b || a.id === b.id) return null;
-    try {
-      return linkGeometry({
-        a: { latDeg: a.latitudeDeg, lonDeg: a.longitudeDeg, heightM: a.groundElevationM + a.mountHeightM },
-        b: { latDeg: b.latitudeDeg, lonDeg: b.longitudeDeg, heightM: b.groundElevationM + b.mountHeightM },
-      });
-    } catch {
-      return null;
-    }
-  }, [sites.data, siteAId, siteBId]);
+  const geometry = useSitePathGeometry(siteAId, siteBId)?.geometry ?? null;
 
   if (role && !policies.canEditDesigns(role)) return <Navigate to={paths.app.links.getHref()} replace />;
 

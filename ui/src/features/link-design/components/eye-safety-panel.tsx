@@ -14,7 +14,7 @@ import {
   tokens,
 } from '@fluentui/react-components';
 import { EyeTrackingRegular, ShieldCheckmarkRegular, WarningRegular } from '@fluentui/react-icons';
-import { assessEyeSafety, dbmToWatts, type EyeSafetyAssessment, type LinkBudget, type LinkDesignInput } from '@beamwright/link-core';
+import { assessEyeSafety, eyeSafetyInputOf, type EyeSafetyAssessment, type LinkBudget, type LinkDesignInput } from '@beamwright/link-core';
 import { formatDistance, formatPowerW } from '@/lib/format';
 
 /** Our own short caution for places where only a line fits; the panel shows link-core's full text. */
@@ -37,13 +37,7 @@ const useStyles = makeStyles({
 
 export function assessDesignEyeSafety(design: LinkDesignInput, budget: LinkBudget | null): { assessment: EyeSafetyAssessment | null; problem: string | null } {
   try {
-    const assessment = assessEyeSafety({
-      powerW: dbmToWatts(design.transmitter.powerDbm),
-      wavelengthM: design.transmitter.wavelengthM,
-      apertureBeamRadiusM: design.transmitter.waistRadiusM,
-      // the half angle the beam actually has (never below the diffraction limit)
-      halfAngleDivergenceRad: budget?.halfAngleDivergenceRad ?? design.transmitter.halfAngleDivergenceRad ?? 0,
-    });
+    const assessment = assessEyeSafety(eyeSafetyInputOf(design, budget));
     return { assessment, problem: null };
   } catch (error) {
     return { assessment: null, problem: error instanceof Error ? error.message : String(error) };

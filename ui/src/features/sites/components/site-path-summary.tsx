@@ -1,7 +1,5 @@
-import { useMemo } from 'react';
 import { Button, Caption1, MessageBar, MessageBarActions, MessageBarBody, makeStyles, tokens } from '@fluentui/react-components';
-import { linkGeometry } from '@beamwright/link-core';
-import { useSites } from '@/features/sites/api/get-sites';
+import { useSitePathGeometry } from '@/features/sites/hooks/use-site-path-geometry';
 import { formatDistance } from '@/lib/format';
 
 const useStyles = makeStyles({
@@ -29,27 +27,10 @@ export interface SitePathSummaryProps {
 /** What the two ends' coordinates say: slant range, bearings and elevations, against the design's path. */
 export function SitePathSummary({ siteAId, siteBId, designRangeM, onUseRangeM }: SitePathSummaryProps) {
   const styles = useStyles();
-  const sites = useSites();
-  const geometry = useMemo(() => {
-    const a = sites.data?.find((site) => site.id === siteAId);
-    const b = sites.data?.find((site) => site.id === siteBId);
-    if (!a || !b) return null;
-    try {
-      return {
-        a,
-        b,
-        result: linkGeometry({
-          a: { latDeg: a.latitudeDeg, lonDeg: a.longitudeDeg, heightM: a.groundElevationM + a.mountHeightM },
-          b: { latDeg: b.latitudeDeg, lonDeg: b.longitudeDeg, heightM: b.groundElevationM + b.mountHeightM },
-        }),
-      };
-    } catch {
-      return null;
-    }
-  }, [sites.data, siteAId, siteBId]);
+  const path = useSitePathGeometry(siteAId, siteBId);
 
-  if (!siteAId || !siteBId || !geometry) return null;
-  const { a, b, result } = geometry;
+  if (!siteAId || !siteBId || !path) return null;
+  const { a, b, geometry: result } = path;
   const mismatch = Math.abs(designRangeM - result.slantRangeM) / result.slantRangeM > MISMATCH_FRACTION;
 
   return (
