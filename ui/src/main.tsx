@@ -1,4 +1,3 @@
-// First: configures zod before any module parses with it at import time.
 import { createStyleRenderer } from '@/lib/content-security';
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';

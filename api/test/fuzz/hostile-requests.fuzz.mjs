@@ -12,7 +12,7 @@ import { Worker } from 'node:worker_threads';
 const BASE_URL = (process.env.BASE_URL ?? 'http://127.0.0.1:3100').replace(/\/$/, '');
 const DEMO_PASSWORD = process.env.DEMO_PASSWORD ?? 'demo-pass-2026';
 const FUZZ_SECONDS = Number(process.env.FUZZ_SECONDS ?? 60);
-const CONCURRENCY = 4;
+const CONCURRENCY = 3;
 const HEALTH_BOUND_MS = 200;
 const MIN_REQUESTS = 3000;
 

@@ -1,10 +1,7 @@
 // Settings that let the built app run under the server's Content-Security-Policy.
-import * as z from 'zod/mini';
+// (zod's `jitless` setting, which keeps it from probing for eval, is set by public/zod-jitless.js:
+// it must run before any module, which an import here cannot guarantee.)
 import { createDOMRenderer, type GriffelRenderer } from '@fluentui/react-components';
-
-// zod compiles object parsers with `new Function` when the page allows it; probing for that is a
-// CSP violation under `script-src 'self'`, so parse without it (the interpreter is as correct).
-z.config({ jitless: true });
 
 /**
  * The per-response nonce the server writes into index.html (Vite's `html.cspNonce` placeholder).
