@@ -40,4 +40,10 @@ describe('chart options', () => {
     expect(typed.yAxis.min).toBeLessThan(0);
     expect(marks).toEqual(expect.arrayContaining([expect.objectContaining({ yAxis: 0 }), expect.objectContaining({ yAxis: 3 }), expect.objectContaining({ xAxis: 2 })]));
   });
+
+  it('ends the path-length axis on the sweep\'s last range written cleanly (1.9 km × 2 = 3.8 km, not 3.8000000000000003)', () => {
+    const design = { ...workedExampleDesign, rangeM: 1900 };
+    const option = marginVsRangeOption(marginVsRange(design), 1900, 3, 'light') as { xAxis: { max: number } };
+    expect(option.xAxis.max).toBe(3.8);
+  });
 });

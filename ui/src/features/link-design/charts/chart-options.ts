@@ -190,7 +190,7 @@ export function beamEnvelopeOption(envelope: BeamEnvelope, mode: ChartMode): Cha
       trigger: 'axis',
       valueFormatter: (value: number) => `${Math.abs(value).toPrecision(3)} ${y.unit}`,
     },
-    xAxis: { type: 'value', name: `distance from the transmitter (${x.unit})`, nameLocation: 'middle', nameGap: 28, max: rangeM * x.factor, ...axisStyle(mode) },
+    xAxis: { type: 'value', name: `distance from the transmitter (${x.unit})`, nameLocation: 'middle', nameGap: 28, max: Number((rangeM * x.factor).toPrecision(6)), ...axisStyle(mode) },
     // symmetric, and tall enough for the receive aperture even when the beam is smaller
     yAxis: { type: 'value', name: `1/e² radius (${y.unit})`, min: -niceLimit(largest * y.factor), max: niceLimit(largest * y.factor), ...axisStyle(mode) },
     series: [
@@ -245,7 +245,7 @@ export function marginVsRangeOption(sweep: RangeSweep, designRangeM: number, req
         return `${distance.toPrecision(4)} ${x.unit}: margin ${round(margin)} dB`;
       },
     },
-    xAxis: { type: 'value', name: `path length (${x.unit})`, nameLocation: 'middle', nameGap: 28, min: 0, max: last * x.factor, ...axisStyle(mode) },
+    xAxis: { type: 'value', name: `path length (${x.unit})`, nameLocation: 'middle', nameGap: 28, min: 0, max: Number((last * x.factor).toPrecision(6)), ...axisStyle(mode) },
     yAxis: { type: 'value', name: 'margin (dB)', min: axisMin, ...axisStyle(mode) },
     series: [
       {
