@@ -56,7 +56,8 @@ export { truncationGainEfficiency, transmittedFraction, optimumTruncation, unifo
 export type { OptimumTruncation, TransmitApertureForSpotInput, TransmitApertureForSpot } from './transmit/truncation.js';
 
 // Receive capture (DOMAIN §3)
-export { centredCaptureFraction, annularCaptureFraction, offsetCaptureFraction, captureFraction, geometricLossDb, smallApertureCaptureApproximation, faridHranilovicCapture, faridHranilovicCaptureFraction, topHatCaptureRatio, offsetForRelativeCapture, fieldOfViewCheck } from './capture/capture.js';
+export { centredCaptureFraction, annularCaptureFraction, offsetCaptureFraction, captureFraction, geometricLossDb, smallApertureCaptureApproximation, faridHranilovicCapture, faridHranilovicCaptureFraction, topHatCaptureRatio, offsetForRelativeCapture, fieldOfViewCheck, logRicianAnnulusProbability, logCentredAnnularCapture, logOffsetAnnularCapture, logMeanAnnularCapture } from './capture/capture.js';
+export { exactMeanPointingLossDb, exactOutagePointingLossDb, ricianOutageRadius } from './pointing/exact-pointing.js';
 export type { CaptureFractionInput, FaridHranilovicCapture, TopHatCaptureInput, FieldOfViewInput, FieldOfViewCheck } from './capture/capture.js';
 
 // Pointing, jitter and building sway (DOMAIN §4)
@@ -103,7 +104,7 @@ export { normaliseAzimuthDeg, geodesicInverse, geodeticToEcef, enuVector, format
 export type { GeodesicInverse, Ecef, Enu } from './geometry/geodesy.js';
 
 // Numerical building blocks
-export { noncentralChiSquare2Tails, marcumQ1, marcumQ1Complement } from './numeric/marcum-q.js';
+export { noncentralChiSquare2Tails, noncentralChiSquare2TailsFast, marcumQ1, marcumQ1Complement } from './numeric/marcum-q.js';
 export type { NoncentralChiSquareTails } from './numeric/marcum-q.js';
 export { findRootBrent } from './numeric/root-finding.js';
 export type { RootFindingOptions } from './numeric/root-finding.js';

@@ -27,8 +27,8 @@ export const POINTING_OUTAGE_DESCRIPTION: TermDescription = {
   label: 'Pointing error (at the outage probability)',
   unit: 'dB',
   method:
-    'Loss 8.686·(r_p/W)² at the radius r_p that the Rician radial error (bias ν = bias·L, jitter σ = jitter·L per axis) exceeds with the design outage probability: Q1(ν/σ, r_p/σ) = p',
-  source: 'Marcum J.I. (1960) Q function; Farid A.A., Hranilovic S., J. Lightwave Technol. 25(7), 1702–1710 (2007) (pointing-error model)',
+    'Loss −10·log10(c_p/C(0)) with c_p the capture the exact annular capture C(R) = Q1(2R/W, 2b/W) − Q1(2R/W, 2a/W) falls below with the design outage probability, R Rician (bias ν = bias·L, jitter σ = jitter·L per axis); where C falls with the offset, c_p = C(r_p) with Q1(ν/σ, r_p/σ) = p. Negative (a gain) when an offset puts more power on an obscured aperture',
+  source: 'Marcum J.I. (1960) Q function; Rice S.O., Bell Syst. Tech. J. 24 (1945); Farid A.A., Hranilovic S., J. Lightwave Technol. 25(7), 1702–1710 (2007) (pointing-error model)',
 };
 
 export const TERM_DESCRIPTIONS: Record<BudgetTermKey, TermDescription> = {
@@ -54,16 +54,18 @@ export const TERM_DESCRIPTIONS: Record<BudgetTermKey, TermDescription> = {
   atmosphericAttenuation: {
     label: 'Atmospheric attenuation (visibility)',
     unit: 'dB',
-    method: 'γ = 4.343·(3.91/V)·(λ/550 nm)^(−q(V)) dB/km over the path; visibility given as MOR (5 %) is first converted to the 2 % visibility, V2 = 1.306·MOR',
+    method: 'γ = 4.343·(3.91/V)·(λ/550 nm)^(−q(V)) dB/km over the path; visibility given as MOR (5 %) is first converted to the 2 % visibility, V2 = (ln 50/ln 20)·MOR = 1.30587·MOR',
     source:
       'Kim I.I., McArthur B., Korevaar E., Proc. SPIE 4214, 26–37 (2001) (q of the Kim model); Kruse P.W. et al., "Elements of Infrared Technology", Wiley (1962) (q of the Kruse model); Koschmieder (1924) and WMO-No. 8 for the 2 %/5 % thresholds',
   },
   pointingLoss: {
     label: 'Pointing error (mean)',
     unit: 'dB',
-    method: 'Mean loss of a small receiver under a Rician radial error: E[exp(−2R²/W²)] = exp(−2ν²/(W² + 4σ²))/(1 + 4σ²/W²), ν = bias·L, σ = jitter·L per axis',
-    source: 'Closed form of the Gaussian average over a Rician offset (derived; checked by quadrature); model of Farid A.A., Hranilovic S., J. Lightwave Technol. 25(7), 1702–1710 (2007)',
+    method:
+      'Mean loss −10·log10(E[C(R)]/C(0)) of the exact annular capture under a Rician radial error: beam and jitter convolve into a Gaussian of per-axis variance W²/4 + σ², so E[C(R)] = Q1(ν/s, b/s) − Q1(ν/s, a/s), s² = W²/4 + σ² (closed form for ν = 0), ν = bias·L, σ = jitter·L per axis. Negative (a gain) when an offset puts more power on an obscured aperture',
+    source: 'Marcum J.I. (1960) Q function; Rice S.O., Bell Syst. Tech. J. 24 (1945); convolution derived; model of Farid A.A., Hranilovic S., J. Lightwave Technol. 25(7), 1702–1710 (2007)',
   },
+
   receiveOptics: {
     label: 'Receive optics and window',
     unit: 'dB',

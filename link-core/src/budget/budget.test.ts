@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { requiredThresholdOverSigma } from '../pointing/pointing.js';
+import { ricianOutageRadius } from '../pointing/exact-pointing.js';
+import { logOffsetAnnularCapture } from '../capture/capture.js';
 import { LinkDesignSchema, type LinkDesignInput } from '../schemas/link-design.schema.js';
 import { LinkBudgetSchema } from '../schemas/link-budget.schema.js';
 import { availabilityFromClimatology, availabilityFromRecords, clearAirMarginDb } from './availability.js';
@@ -27,9 +29,9 @@ function variant(change: (design: LinkDesignInput) => void): LinkDesignInput {
 describe('evaluateLink', () => {
   const budget = evaluateLink(lb01);
 
-  it('gives the LB-01 margin (12.33 dB, DOMAIN §8)', () => {
-    expect(budget.linkMarginDb).toBeCloseTo(12.3323, 4);
-    expect(budget.receivedPowerDbm).toBeCloseTo(-13.8523, 4);
+  it('gives the LB-01 margin with the exact capture (12.33 dB, reference case LB-01-exact-pointing)', () => {
+    expect(budget.linkMarginDb).toBeCloseTo(12.33237831, 6);
+    expect(budget.receivedPowerDbm).toBeCloseTo(-13.8521807, 6);
   });
 
   it('refuses a design with a required field missing instead of answering NaN, naming the field', () => {
@@ -147,37 +149,74 @@ describe('evaluateLink', () => {
     expect(wide.checks.map((check) => check.key)).not.toContain('field-of-view-below-turbulence-blur');
   });
 
-  it('budgets the loss at the outage radius for an outage-based design (DOMAIN §4.2)', () => {
+  it('budgets the exact capture at the outage radius for an outage-based design', () => {
     const outage = evaluateLink(variant((design) => (design.pointing.outageProbability = 1e-3)));
-    // bias/jitter = 100/50 µrad = 2 and p = 1e-3 give r_p = 5.241σ (DOMAIN §4.2, PT-04 example)
-    const radiusM = 5.241 * 50e-6 * 2000;
+    // bias/jitter = 100/50 µrad = 2 and p = 1e-3 give r_p = 5.241σ (Marcum Q1 root, as in the PT-04 reference case)
+    const radiusM = ricianOutageRadius(50e-6 * 2000, 100e-6 * 2000, 1e-3);
+    expect(radiusM / (50e-6 * 2000)).toBeCloseTo(5.241, 3);
+    const w = outage.beamRadiusAtReceiverM;
+    const exact = -(10 / Math.LN10) * (logOffsetAnnularCapture(w, 0.05, 0, radiusM) - Math.log(-Math.expm1(-2 * (0.05 / w) ** 2)));
     expect(outage.pointingLossModel).toBe('outage');
-    expect(outage.pointingLossDb).toBeCloseTo(8.686 * (radiusM / outage.beamRadiusAtReceiverM) ** 2, 3);
+    expect(outage.pointingLossDb).toBeCloseTo(exact, 12);
+    // a/W = 0.025 here: the small-receiver form 8.686·(r_p/W)² is within 1e-3 dB of the exact capture
+    expect(outage.pointingLossDb).toBeCloseTo(8.686 * (radiusM / w) ** 2, 2);
     expect(outage.pointingLossDb).toBeGreaterThan(budget.pointingLossDb);
     expect(outage.terms[4]!.label).toMatch(/outage/);
     expect(budget.pointingLossModel).toBe('mean');
     const noJitter = evaluateLink(variant((design) => {
       design.pointing = { jitterSigmaPerAxisRad: 0, staticErrorRad: 100e-6, outageProbability: 1e-3 };
     }));
-    expect(noJitter.pointingLossDb).toBeCloseTo(8.6859 * ((100e-6 * 2000) / noJitter.beamRadiusAtReceiverM) ** 2, 4);
+    expect(noJitter.pointingLossDb).toBeCloseTo(8.6859 * ((100e-6 * 2000) / noJitter.beamRadiusAtReceiverM) ** 2, 3);
   });
 
-  it('uses the Gaussian limit of the Rician tail for a bias of many σ, in agreement with the exact root', () => {
+  it('finds the outage radius of a bias of many σ by the exact root, and by the Gaussian limit beyond 1e4 σ', () => {
     const design = variant((d) => (d.pointing = { jitterSigmaPerAxisRad: 1e-6, staticErrorRad: 150e-6, outageProbability: 1e-3 }));
     const exactRadiusM = requiredThresholdOverSigma({ outageProbability: 1e-3, staticOffsetOverSigma: 150 }) * 1e-6 * 2000;
+    expect(Math.abs(ricianOutageRadius(1e-6 * 2000, 150e-6 * 2000, 1e-3) / exactRadiusM - 1)).toBeLessThan(1e-12);
     const budgetOutage = evaluateLink(design);
-    const exactLossDb = 2 * (10 / Math.LN10) * (exactRadiusM / budgetOutage.beamRadiusAtReceiverM) ** 2;
-    expect(Math.abs(budgetOutage.pointingLossDb / exactLossDb - 1)).toBeLessThan(1e-6);
+    const w = budgetOutage.beamRadiusAtReceiverM;
+    const exactLossDb = -(10 / Math.LN10) * (logOffsetAnnularCapture(w, 0.05, 0, exactRadiusM) - Math.log(-Math.expm1(-2 * (0.05 / w) ** 2)));
+    expect(Math.abs(budgetOutage.pointingLossDb / exactLossDb - 1)).toBeLessThan(1e-9);
+    // 1e4 σ: the Gaussian limit ν − σ·Φ⁻¹(p) + σ²/(2ν) against the exact root (quadrature Q1)
+    const exactFar = ricianOutageRadius(1, 1e4, 1e-3);
+    expect(Math.abs((1e4 + 3.090232306167813 + 0.5e-4) / exactFar - 1)).toBeLessThan(1e-11);
   });
 
-  it('flags the small-receiver pointing model when the aperture is not small against the beam', () => {
-    expect(evaluateLink(lb01).checks.map((check) => check.key)).not.toContain('pointing-small-receiver-approximation');
-    const short = evaluateLink(variant((design) => {
-      design.rangeM = 60;
-      design.pointing.jitterSigmaPerAxisRad = 1e-3;
+  it('makes the pointing term a gain when an offset moves power onto an obscured aperture', () => {
+    // Short link, narrow beam, large obscuration: the beam centre sits behind the secondary mirror.
+    const gain = evaluateLink(variant((design) => {
+      design.rangeM = 200;
+      design.transmitter.halfAngleDivergenceRad = 100e-6;
+      design.receiver.apertureDiameterM = 0.2;
+      design.receiver.obscurationRatio = 0.4;
+      design.pointing = { jitterSigmaPerAxisRad: 50e-6, staticErrorRad: 150e-6 };
+      design.scintillation = { include: false };
     }));
-    expect(short.pointingLossDb).toBeGreaterThan(0.1);
-    expect(short.checks.map((check) => check.key)).toContain('pointing-small-receiver-approximation');
+    expect(gain.pointingLossDb).toBeLessThan(0);
+    expect(gain.terms[4]!.valueDb).toBeGreaterThan(0);
+    const sum = gain.terms.reduce((total, t) => total + t.valueDb, 0);
+    expect(sum).toBeCloseTo(gain.linkMarginDb, 9);
+  });
+
+  it('stays finite where the obscuration hides nearly all of the beam', () => {
+    const hidden = evaluateLink(variant((design) => {
+      design.rangeM = 50;
+      design.transmitter.halfAngleDivergenceRad = undefined;
+      design.receiver.apertureDiameterM = 0.5;
+      design.receiver.obscurationRatio = 0.9;
+      design.pointing = { jitterSigmaPerAxisRad: 1e-6, staticErrorRad: 2e-6 };
+    }));
+    expect(hidden.geometricLossDb).toBeGreaterThan(300);
+    expect(Number.isFinite(hidden.pointingLossDb)).toBe(true);
+    expect(Number.isFinite(hidden.linkMarginDb)).toBe(true);
+    const outage = evaluateLink(variant((design) => {
+      design.rangeM = 50;
+      design.transmitter.halfAngleDivergenceRad = undefined;
+      design.receiver.apertureDiameterM = 0.5;
+      design.receiver.obscurationRatio = 0.9;
+      design.pointing = { jitterSigmaPerAxisRad: 1e-6, staticErrorRad: 2e-6, outageProbability: 1e-3 };
+    }));
+    expect(Number.isFinite(outage.pointingLossDb)).toBe(true);
   });
 
   it('gives the same margin through linkMarginAtRangeDb', () => {

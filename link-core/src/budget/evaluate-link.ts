@@ -20,24 +20,8 @@ function diffractionHalfAngle(design: ResolvedDesign): number {
   return (design.m2 * design.wavelengthM) / (Math.PI * design.apertureBeamRadiusM);
 }
 
-/** Above this aperture-radius-to-beam-radius ratio the small-receiver pointing model is flagged. */
-const SMALL_RECEIVER_RATIO_LIMIT = 0.3;
-
-/** Pointing losses below this are too small for the model's approximation to matter [dB]. */
-const NOTICEABLE_POINTING_LOSS_DB = 0.1;
-
-function collectChecks(design: ResolvedDesign, receivedPowerDbm: number, diffractionRad: number, beamRadiusAtReceiverM: number, pointingLossDb: number): BudgetCheck[] {
+function collectChecks(design: ResolvedDesign, receivedPowerDbm: number, diffractionRad: number): BudgetCheck[] {
   const checks: BudgetCheck[] = [];
-  const apertureOverBeam = design.apertureDiameterM / 2 / beamRadiusAtReceiverM;
-  if (apertureOverBeam > SMALL_RECEIVER_RATIO_LIMIT && pointingLossDb > NOTICEABLE_POINTING_LOSS_DB) {
-    // The pointing term multiplies the on-axis capture by exp(−2r²/W²), exact only for a ≪ W
-    // (Farid & Hranilovic 2007 quantify the finite-aperture case).
-    checks.push({
-      key: 'pointing-small-receiver-approximation',
-      severity: 'info',
-      message: `The receive aperture is not small against the beam (a/W = ${apertureOverBeam.toFixed(2)}): the pointing loss uses the small-receiver model and is approximate here.`,
-    });
-  }
   if (design.halfAngleDivergenceRad > 0 && design.halfAngleDivergenceRad <= diffractionRad) {
     checks.push({
       key: 'divergence-below-diffraction-limit',
@@ -56,7 +40,7 @@ function collectChecks(design: ResolvedDesign, receivedPowerDbm: number, diffrac
     checks.push({
       key: 'visibility-converted-from-mor',
       severity: 'info',
-      message: 'Visibility entered as MOR (5 % contrast) was converted to the 2 % visibility (× 1.306) before the attenuation model was applied.',
+      message: 'Visibility entered as MOR (5 % contrast) was converted to the 2 % visibility (× ln 50/ln 20 = 1.30587) before the attenuation model was applied.',
     });
   }
   if (design.kruse && design.visibility2PercentKm <= 6) {
@@ -189,7 +173,7 @@ export function evaluateLink(design: LinkDesignInput): LinkBudget {
     scintillationFadeMarginDb: chain.scintillationFadeMarginDb,
     systemMarginDb: resolved.systemMarginDb,
     linkMarginDb: chain.linkMarginDb,
-    checks: collectChecks(resolved, chain.receivedPowerDbm, diffractionRad, chain.beamRadiusAtReceiverM, chain.pointingLossDb),
+    checks: collectChecks(resolved, chain.receivedPowerDbm, diffractionRad),
   };
 }
 

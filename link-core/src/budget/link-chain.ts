@@ -7,7 +7,8 @@
 import { alNaboulsiFogExtinctionPerKm } from '../atmosphere/fog-and-precipitation.js';
 import { VISIBILITY_2_PERCENT_PER_MOR, visibility2PercentForAttenuationKm, visibilityExtinctionPerKmFast } from '../atmosphere/visibility-attenuation.js';
 import { launchBeamRadiusAtRangeM } from '../beam/launch.js';
-import { meanPointingLossDb, requiredThresholdOverSigma } from '../pointing/pointing.js';
+import { logMeanAnnularCapture } from '../capture/capture.js';
+import { exactOutagePointingLossAtRadiusDb, ricianOutageRadius } from '../pointing/exact-pointing.js';
 import { LINK_DESIGN_DEFAULTS, type AtmosphereModel, type LinkDesignInput } from '../schemas/link-design.schema.js';
 import { apertureAveragedFadeMarginDb, apertureAveragedScintillationIndexFast } from '../turbulence/scintillation.js';
 import { normalQuantileOf } from '../turbulence/normal.js';
@@ -38,6 +39,8 @@ export interface ResolvedDesign {
    * since bias and jitter both scale with L); NaN for the mean-loss model
    */
   pointingOutageAngleRad: number;
+  /** the design's pointing outage probability; NaN for the mean-loss model */
+  pointingOutageProbability: number;
   /** visibility model of the design */
   atmosphereModel: AtmosphereModel;
   /** Kruse's exponent (Kim's otherwise) for the Kim/Kruse family */
@@ -58,24 +61,21 @@ export interface ResolvedDesign {
 
 /**
  * Angular pointing error exceeded with probability p by a Rician error with bias θb and per-axis
- * jitter σθ: r_p/σ from Q1(θb/σθ, r_p/σ) = p, times σθ; the bias itself when there is no jitter.
- * @see Marcum J.I. (1960); DOMAIN §4.2 (pointing margin for a target outage).
+ * jitter σθ: the exact root of Q1(θb/σθ, r_p/σθ) = p (range-free: bias and jitter both scale with L).
+ * @see Marcum J.I. (1960); ricianOutageRadius.
  */
 function outageAngleRad(jitterSigmaPerAxisRad: number, staticErrorRad: number, outageProbability: number): number {
-  if (jitterSigmaPerAxisRad === 0) return staticErrorRad;
-  const offsetOverSigma = staticErrorRad / jitterSigmaPerAxisRad;
-  if (offsetOverSigma > LARGE_OFFSET_OVER_SIGMA) {
-    // A bias of many σ: R = |ν + x + i·y| ≈ ν + x + y²/(2ν), so r_p ≈ ν + σ·Φ⁻¹(1 − p) + σ²/(2ν)
-    // (derived; within 1e-6 of the exact Marcum-Q root at ν/σ = 100 and closer beyond, where the
-    // exact root is slow to evaluate).
-    // Written as ν − σ·Φ⁻¹(p) + σ²/(2ν) rather than σ·(ν/σ − …): ν/σ overflows for a vanishing jitter.
+  if (jitterSigmaPerAxisRad > 0 && staticErrorRad / jitterSigmaPerAxisRad > LARGE_OFFSET_OVER_SIGMA) {
+    // A bias of very many σ: R = |ν + x + i·y| ≈ ν + x + y²/(2ν), so r_p ≈ ν − σ·Φ⁻¹(p) + σ²/(2ν)
+    // (derived; the next term is of order σ³/ν², below 1e-12 of r_p here). Written without ν/σ,
+    // which overflows for a vanishing jitter.
     return staticErrorRad - jitterSigmaPerAxisRad * normalQuantileOf(outageProbability) + (jitterSigmaPerAxisRad / staticErrorRad) * (jitterSigmaPerAxisRad / 2);
   }
-  return jitterSigmaPerAxisRad * requiredThresholdOverSigma({ outageProbability, staticOffsetOverSigma: offsetOverSigma });
+  return ricianOutageRadius(jitterSigmaPerAxisRad, staticErrorRad, outageProbability);
 }
 
 /** Above this bias/jitter ratio the outage radius uses the Gaussian limit of the Rician tail. */
-const LARGE_OFFSET_OVER_SIGMA = 100;
+const LARGE_OFFSET_OVER_SIGMA = 1e4;
 
 /**
  * Numerator of Al Naboulsi's fog extinction β = c/V (λ in µm, V in km): advection
@@ -112,6 +112,7 @@ export function emptyResolvedDesign(): ResolvedDesign {
     jitterSigmaPerAxisRad: 0,
     staticErrorRad: 0,
     pointingOutageAngleRad: Number.NaN,
+    pointingOutageProbability: Number.NaN,
     atmosphereModel: 'kim',
     kruse: false,
     fogNumeratorPerKm: 0,
@@ -149,6 +150,7 @@ export function resolveDesignInto(target: ResolvedDesign, design: LinkDesignInpu
   target.staticErrorRad = pointing.staticErrorRad;
   target.pointingOutageAngleRad =
     pointing.outageProbability === undefined ? Number.NaN : outageAngleRad(pointing.jitterSigmaPerAxisRad, pointing.staticErrorRad, pointing.outageProbability);
+  target.pointingOutageProbability = pointing.outageProbability ?? Number.NaN;
   target.atmosphereModel = model;
   target.kruse = model === 'kruse';
   target.fogNumeratorPerKm = model === 'kim' || model === 'kruse' ? 0 : alNaboulsiNumerator(model, transmitter.wavelengthM);
@@ -259,14 +261,17 @@ export function evaluateChain(design: ResolvedDesign, rangeM: number, attenuatio
   const geometricLossDb = centredGeometricLossDb(beamRadiusM, apertureRadiusM, apertureRadiusM * design.obscurationRatio);
   const captureFraction = lastCaptureFraction;
   const atmosphericLossDb = (attenuationDbPerKm * rangeM) / 1000;
-  let pointingLossDb: number;
-  if (Number.isNaN(design.pointingOutageAngleRad)) {
-    pointingLossDb = meanPointingLossDb(beamRadiusM, design.jitterSigmaPerAxisRad * rangeM, design.staticErrorRad * rangeM);
-  } else {
-    // Loss of a small receiver at the outage radius: −10·log10(exp(−2r²/W²)) = 8.686·(r/W)² (DOMAIN §4.2).
-    const ratio = (design.pointingOutageAngleRad * rangeM) / beamRadiusM;
-    pointingLossDb = 2 * DB_PER_NEPER_POWER * ratio * ratio;
-  }
+  const obscurationRadiusM = apertureRadiusM * design.obscurationRatio;
+  const jitterM = design.jitterSigmaPerAxisRad * rangeM;
+  const biasM = design.staticErrorRad * rangeM;
+  // Exact capture of the annular aperture under the Rician error, relative to the centred capture
+  // (negative when an offset puts more power on an obscured aperture).
+  // Mean mode: −10·log10(E[C]/C(0)) with 10·log10 C(0) = −geometricLossDb already at hand.
+  const pointingLossDb = Number.isNaN(design.pointingOutageAngleRad)
+    ? jitterM === 0 && biasM === 0
+      ? 0
+      : -DB_PER_NEPER_POWER * logMeanAnnularCapture(beamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM) - geometricLossDb + 0
+    : exactOutagePointingLossAtRadiusDb(beamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM, design.pointingOutageProbability, design.pointingOutageAngleRad * rangeM);
   const receivedPowerDbm =
     design.powerDbm - design.transmitOpticsLossDb - geometricLossDb - atmosphericLossDb - pointingLossDb - design.receiveOpticsLossDb;
   let rytovVarianceSpherical = 0;

@@ -24,7 +24,8 @@ export type BudgetTermKey = (typeof BUDGET_TERM_KEYS)[number];
 /**
  * One step of the budget. `valueDb` is the signed contribution to the link margin: the transmit
  * power counts positive (in dBm), every loss and allowance negative (in dB), and the sensitivity
- * term is −S (in dB relative to 1 mW). Summing `valueDb` over the terms gives the link margin, and
+ * term is −S (in dB relative to 1 mW). A loss term can be a gain (positive `valueDb`) where the
+ * physics gives one (the pointing term on an obscured aperture); it is never clamped. Summing `valueDb` over the terms gives the link margin, and
  * summing the terms up to `receiveOptics` gives the received power in dBm — a waterfall chart is
  * the running sum.
  */
@@ -77,7 +78,12 @@ export const LinkBudgetSchema = z.object({
   specificAttenuationDbPerKm: finiteNumber(),
   /** atmospheric loss γ·L, positive [dB] */
   atmosphericLossDb: finiteNumber(),
-  /** pointing loss, positive [dB]: the mean loss (Rician error, small-receiver closed form) or, for an outage-based design, the loss at the outage probability */
+  /**
+   * pointing loss [dB], relative to the centred capture, from the exact annular capture under the
+   * Rician error: the mean loss or, for an outage-based design, the loss exceeded with the outage
+   * probability. Signed: negative (a gain, shown as one) when an offset moves power from behind a
+   * central obscuration onto the annulus.
+   */
   pointingLossDb: finiteNumber(),
   pointingLossModel: z.enum(['mean', 'outage']),
   /** mean received power at the receiver's reference plane [dBm] */
