@@ -89,7 +89,8 @@ describe('link budget properties', () => {
       ),
       { numRuns: 200 },
     );
-  });
+    // 16 000 full budgets (some on the exact-capture slow paths): more than the default 5 s on a loaded machine
+  }, 30_000);
 
   it('maxRangeM returns a range where the margin equals the requirement and is not met just beyond', () => {
     fc.assert(
@@ -161,7 +162,9 @@ describe('link budget properties', () => {
           scintillation: { include: true, probability: 1e-3 },
         };
         const [near, far] = first < second ? [first, second] : [second, first];
-        expect(linkMarginAtRangeDb(turbulent, far)).toBeLessThanOrEqual(linkMarginAtRangeDb(turbulent, near) + 1e-6);
+        // 1e-6 dB plus rounding of margins of millions of dB (a bias of 0.1 rad) in relative terms
+        const nearMarginDb = linkMarginAtRangeDb(turbulent, near);
+        expect(linkMarginAtRangeDb(turbulent, far)).toBeLessThanOrEqual(nearMarginDb + 1e-6 + 1e-13 * Math.abs(nearMarginDb));
       }),
       { numRuns: 300 },
     );

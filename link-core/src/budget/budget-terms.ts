@@ -31,6 +31,15 @@ export const POINTING_OUTAGE_DESCRIPTION: TermDescription = {
   source: 'Marcum J.I. (1960) Q function; Rice S.O., Bell Syst. Tech. J. 24 (1945); Farid A.A., Hranilovic S., J. Lightwave Technol. 25(7), 1702–1710 (2007) (pointing-error model)',
 };
 
+/** The fade margin of the Gaussian-beam turbulence model (replaces the spherical-wave description). */
+export const BEAM_WAVE_FADE_DESCRIPTION: TermDescription = {
+  label: 'Scintillation fade margin (beam wave)',
+  unit: 'dB',
+  method:
+    'F = −10·log10(I_T/⟨I⟩) with P(I < I_T) = p under a gamma-gamma irradiance; α, β from the aperture-averaged beam-wave log variances: on-axis σ_B² = σ_R²·ratio(Θ, Λ) (hypergeometric form), off-axis 4.42·σ_R²·Λ^(5/6)·(ν² + ⟨r_c²⟩)/W², saturation 0.56(1 + Θ), aperture coefficient between the spherical and plane values linearly in Θ (ours), an obscured aperture as the disc of equal area (ours, conservative). An estimate (±2 dB)',
+  source: `${ANDREWS_PHILLIPS}, ch. 8–10 (from memory); Al-Habash M.A., Andrews L.C., Phillips R.L., Opt. Eng. 40(8), 1554–1562 (2001)`,
+};
+
 export const TERM_DESCRIPTIONS: Record<BudgetTermKey, TermDescription> = {
   transmitPower: {
     label: 'Transmit power',
@@ -50,6 +59,13 @@ export const TERM_DESCRIPTIONS: Record<BudgetTermKey, TermDescription> = {
     method:
       'Centred Gaussian capture η = exp(−2b²/W²) − exp(−2a²/W²) with W(L) of the launched beam: W² = W0²(1 + L/|F0|)² + (θd·L)², F0 = −W0/√(θ² − θd²), θd = M²λ/(πW0); collimated when θ ≤ θd',
     source: `Kogelnik H., Li T., Appl. Opt. 5(10), 1550–1567 (1966); ${ANDREWS_PHILLIPS}, ch. 4 (beam parameters Θ0, Λ0)`,
+  },
+  turbulenceBeamSpread: {
+    label: 'Turbulence beam spread (long-term beam wider than in vacuum)',
+    unit: 'dB',
+    method:
+      '10·log10(C(0; W_LT)/C(0; W)) with C the centred annular capture and W_LT = W·√(1 + T) the long-term radius, beam wander inside it: T the smooth maximum (T_w⁶ + T_s⁶)^(1/6) of the weak 1.33·σ_R²·Λ^(5/6) and strong 1.63·σ_R^(12/5)·Λ forms, Λ of the launched beam at the receiver. 0 for the spherical-wave model or Cn² = 0; a gain where the obscuration is about the size of the beam',
+    source: `${ANDREWS_PHILLIPS}, ch. 4 (Λ) and ch. 6 (long-term spread; coefficients from memory, 1.33 checked against our integration of the Kolmogorov-spectrum integral); the joining smooth maximum is ours`,
   },
   atmosphericAttenuation: {
     label: 'Atmospheric attenuation (visibility)',

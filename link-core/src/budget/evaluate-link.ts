@@ -6,7 +6,7 @@ import { coherenceRadiusM } from '../turbulence/rytov.js';
 import type { BudgetCheck, BudgetTerm, BudgetTermKey, LinkBudget } from '../schemas/link-budget.schema.js';
 import { formatZodIssues } from '../schemas/format-zod-issues.js';
 import { LinkDesignSchema, type LinkDesignInput } from '../schemas/link-design.schema.js';
-import { FOG_ATTENUATION_DESCRIPTION, POINTING_OUTAGE_DESCRIPTION, TERM_DESCRIPTIONS, type TermDescription } from './budget-terms.js';
+import { BEAM_WAVE_FADE_DESCRIPTION, FOG_ATTENUATION_DESCRIPTION, POINTING_OUTAGE_DESCRIPTION, TERM_DESCRIPTIONS, type TermDescription } from './budget-terms.js';
 import { emptyResolvedDesign, evaluateChain, resolveDesign, resolveDesignInto, specificAttenuationDbPerKm, type ResolvedDesign } from './link-chain.js';
 
 // The description is passed in (not looked up by key) so that each call site stays monomorphic.
@@ -134,7 +134,7 @@ export function evaluateLink(design: LinkDesignInput): LinkBudget {
   const resolved = resolveDesignInto(scratchDesign, design);
   if (!hasEveryRequiredNumber(resolved)) throw invalidDesignError(design);
   const attenuation = specificAttenuationDbPerKm(resolved, resolved.visibility2PercentKm);
-  const chain = evaluateChain(resolved, resolved.rangeM, attenuation, resolved.includeScintillation);
+  const chain = evaluateChain(resolved, resolved.rangeM, attenuation, resolved.includeScintillation, true);
   // NaN or ±Infinity in an input the typeof check let through (the schema rejects both) shows in
   // the margin or the beam: name the field rather than answer NaN. A design the schema accepts is
   // returned as computed (callers that store budgets check them against LinkBudgetSchema).
@@ -146,11 +146,12 @@ export function evaluateLink(design: LinkDesignInput): LinkBudget {
     term('transmitPower', TERM_DESCRIPTIONS.transmitPower, resolved.powerDbm),
     term('transmitOptics', TERM_DESCRIPTIONS.transmitOptics, -resolved.transmitOpticsLossDb),
     term('geometricSpread', TERM_DESCRIPTIONS.geometricSpread, -chain.geometricLossDb),
+    term('turbulenceBeamSpread', TERM_DESCRIPTIONS.turbulenceBeamSpread, -chain.turbulenceBeamSpreadLossDb),
     term('atmosphericAttenuation', resolved.fogNumeratorPerKm > 0 ? FOG_ATTENUATION_DESCRIPTION : TERM_DESCRIPTIONS.atmosphericAttenuation, -chain.atmosphericLossDb),
     term('pointingLoss', outagePointing ? POINTING_OUTAGE_DESCRIPTION : TERM_DESCRIPTIONS.pointingLoss, -chain.pointingLossDb),
     term('receiveOptics', TERM_DESCRIPTIONS.receiveOptics, -resolved.receiveOpticsLossDb),
     term('receiverSensitivity', TERM_DESCRIPTIONS.receiverSensitivity, -resolved.sensitivityDbm),
-    term('scintillationFade', TERM_DESCRIPTIONS.scintillationFade, -chain.scintillationFadeMarginDb),
+    term('scintillationFade', resolved.gaussianBeam ? BEAM_WAVE_FADE_DESCRIPTION : TERM_DESCRIPTIONS.scintillationFade, -chain.scintillationFadeMarginDb),
     term('systemAllowance', TERM_DESCRIPTIONS.systemAllowance, -resolved.systemMarginDb),
   ];
   return {
@@ -160,6 +161,9 @@ export function evaluateLink(design: LinkDesignInput): LinkBudget {
     diffractionHalfAngleRad: diffractionRad,
     rayleighRangeM: resolved.apertureBeamRadiusM / diffractionRad,
     beamRadiusAtReceiverM: chain.beamRadiusAtReceiverM,
+    turbulenceModel: resolved.gaussianBeam ? 'gaussian-beam' : 'spherical-wave',
+    longTermBeamRadiusM: chain.longTermBeamRadiusM,
+    beamWanderRmsM: chain.beamWanderRmsM,
     captureFraction: chain.captureFraction,
     geometricLossDb: chain.geometricLossDb,
     effectiveVisibilityM: resolved.visibility2PercentKm * 1000,

@@ -13,6 +13,7 @@ import { LINK_DESIGN_DEFAULTS, type AtmosphereModel, type LinkDesignInput } from
 import { apertureAveragedFadeMarginDb, apertureAveragedScintillationIndexFast } from '../turbulence/scintillation.js';
 import { normalQuantileOf } from '../turbulence/normal.js';
 import { rytovVarianceFast } from '../turbulence/rytov.js';
+import { beamWaveAtReceiverFast, beamWaveScintillationFast, type BeamWaveAtReceiver } from '../turbulence/beam-wave.js';
 
 const DB_PER_NEPER_POWER = 10 / Math.LN10;
 
@@ -54,6 +55,8 @@ export interface ResolvedDesign {
   visibility2PercentKm: number;
   morInput: boolean;
   cn2: number;
+  /** Gaussian-beam turbulence model (long-term spread, beam-wave scintillation); false: spherical wave */
+  gaussianBeam: boolean;
   includeScintillation: boolean;
   fadeProbability: number;
   systemMarginDb: number;
@@ -119,6 +122,7 @@ export function emptyResolvedDesign(): ResolvedDesign {
     visibility2PercentKm: 0,
     morInput: false,
     cn2: 0,
+    gaussianBeam: true,
     includeScintillation: false,
     fadeProbability: 0,
     systemMarginDb: 0,
@@ -157,6 +161,7 @@ export function resolveDesignInto(target: ResolvedDesign, design: LinkDesignInpu
   target.visibility2PercentKm = (morInput ? atmosphere.visibilityM * VISIBILITY_2_PERCENT_PER_MOR : atmosphere.visibilityM) / 1000;
   target.morInput = morInput;
   target.cn2 = atmosphere.cn2;
+  target.gaussianBeam = (atmosphere.turbulenceModel ?? LINK_DESIGN_DEFAULTS.turbulenceModel) === 'gaussian-beam';
   target.includeScintillation = design.scintillation?.include ?? LINK_DESIGN_DEFAULTS.scintillationInclude;
   target.fadeProbability = design.scintillation?.probability ?? LINK_DESIGN_DEFAULTS.scintillationProbability;
   target.systemMarginDb = design.systemMarginDb ?? LINK_DESIGN_DEFAULTS.systemMarginDb;
@@ -219,6 +224,12 @@ let lastCaptureFraction = 0;
 /** Numbers of one evaluation of the chain (all losses positive, in dB). */
 export interface ChainResult {
   beamRadiusAtReceiverM: number;
+  /** long-term beam radius W_LT [m]; W when spherical-wave or Cn² = 0 */
+  longTermBeamRadiusM: number;
+  /** radial rms beam wander [m]; 0 when spherical-wave or Cn² = 0 */
+  beamWanderRmsM: number;
+  /** 10·log10(C(0; W)/C(0; W_LT)) [dB]; 0 when spherical-wave or Cn² = 0, negative when a gain */
+  turbulenceBeamSpreadLossDb: number;
   captureFraction: number;
   geometricLossDb: number;
   atmosphericLossDb: number;
@@ -234,6 +245,9 @@ export interface ChainResult {
 // paths (maxRange, the samplers, evaluateLink) then allocate nothing per evaluation.
 const scratch: ChainResult = {
   beamRadiusAtReceiverM: 0,
+  longTermBeamRadiusM: 0,
+  beamWanderRmsM: 0,
+  turbulenceBeamSpreadLossDb: 0,
   captureFraction: 0,
   geometricLossDb: 0,
   atmosphericLossDb: 0,
@@ -252,10 +266,11 @@ const scratch: ChainResult = {
  * @param rangeM path length [m], > 0
  * @param attenuationDbPerKm specific atmospheric attenuation γ [dB/km], ≥ 0
  * @param includeScintillation whether to subtract the fade margin
+ * @param wanderWanted whether to compute the (informational) beam wander when the fade margin is off
  * @returns the chain's numbers, in a shared object that the next call overwrites (copy what you keep)
  * @see DOMAIN §8; the sources of each term are in budget-terms.ts.
  */
-export function evaluateChain(design: ResolvedDesign, rangeM: number, attenuationDbPerKm: number, includeScintillation: boolean): ChainResult {
+export function evaluateChain(design: ResolvedDesign, rangeM: number, attenuationDbPerKm: number, includeScintillation: boolean, wanderWanted = false): ChainResult {
   const beamRadiusM = launchBeamRadiusAtRangeM(design.wavelengthM, design.apertureBeamRadiusM, design.halfAngleDivergenceRad, design.m2, rangeM);
   const apertureRadiusM = design.apertureDiameterM / 2;
   const geometricLossDb = centredGeometricLossDb(beamRadiusM, apertureRadiusM, apertureRadiusM * design.obscurationRatio);
@@ -264,27 +279,50 @@ export function evaluateChain(design: ResolvedDesign, rangeM: number, attenuatio
   const obscurationRadiusM = apertureRadiusM * design.obscurationRatio;
   const jitterM = design.jitterSigmaPerAxisRad * rangeM;
   const biasM = design.staticErrorRad * rangeM;
+  // Gaussian-beam model: the long-term beam (wander inside it) replaces W for capture and pointing.
+  let captureBeamRadiusM = beamRadiusM;
+  let captureLossDb = geometricLossDb;
+  let turbulenceBeamSpreadLossDb = 0;
+  let beamWanderRmsM = 0;
+  let beam: BeamWaveAtReceiver | undefined;
+  if (design.gaussianBeam && design.cn2 > 0) {
+    beam = beamWaveAtReceiverFast(design.wavelengthM, design.apertureBeamRadiusM, design.halfAngleDivergenceRad, design.m2, rangeM, design.cn2, beamRadiusM, includeScintillation || wanderWanted);
+    captureBeamRadiusM = beam.longTermBeamRadiusM;
+    beamWanderRmsM = beam.beamWanderRmsM;
+    captureLossDb = centredGeometricLossDb(captureBeamRadiusM, apertureRadiusM, obscurationRadiusM);
+    turbulenceBeamSpreadLossDb = captureLossDb - geometricLossDb;
+  }
   // Exact capture of the annular aperture under the Rician error, relative to the centred capture
-  // (negative when an offset puts more power on an obscured aperture).
-  // Mean mode: −10·log10(E[C]/C(0)) with 10·log10 C(0) = −geometricLossDb already at hand.
+  // (negative when an offset puts more power on an obscured aperture). Mean mode:
+  // −10·log10(E[C]/C(0)) with 10·log10 C(0) = −captureLossDb already at hand.
   const pointingLossDb = Number.isNaN(design.pointingOutageAngleRad)
     ? jitterM === 0 && biasM === 0
       ? 0
-      : -DB_PER_NEPER_POWER * logMeanAnnularCapture(beamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM) - geometricLossDb + 0
-    : exactOutagePointingLossAtRadiusDb(beamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM, design.pointingOutageProbability, design.pointingOutageAngleRad * rangeM);
+      : -DB_PER_NEPER_POWER * logMeanAnnularCapture(captureBeamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM) - captureLossDb + 0
+    : exactOutagePointingLossAtRadiusDb(captureBeamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM, design.pointingOutageProbability, design.pointingOutageAngleRad * rangeM);
   const receivedPowerDbm =
-    design.powerDbm - design.transmitOpticsLossDb - geometricLossDb - atmosphericLossDb - pointingLossDb - design.receiveOpticsLossDb;
+    design.powerDbm - design.transmitOpticsLossDb - geometricLossDb - turbulenceBeamSpreadLossDb - atmosphericLossDb - pointingLossDb - design.receiveOpticsLossDb;
   let rytovVarianceSpherical = 0;
   let scintillationIndex = 0;
   let scintillationFadeMarginDb = 0;
   if (includeScintillation && design.cn2 > 0) {
-    // Spherical wave, aperture averaged, gamma-gamma at p (DOMAIN §6.2, §6.5, §6.7): divergent FSO
-    // beams have Θ ≈ 0 at the receiver and behave as spherical waves.
     rytovVarianceSpherical = rytovVarianceFast(design.cn2, design.wavelengthM, rangeM, true);
-    scintillationIndex = apertureAveragedScintillationIndexFast(design.wavelengthM, rangeM, design.cn2, design.apertureDiameterM);
-    scintillationFadeMarginDb = apertureAveragedFadeMarginDb(design.wavelengthM, rangeM, design.cn2, design.apertureDiameterM, design.fadeProbability);
+    if (beam !== undefined) {
+      // Beam wave, aperture averaged, off axis by the bias and the wander (turbulence/beam-wave.ts).
+      const wave = beamWaveScintillationFast(design.wavelengthM, rangeM, design.apertureDiameterM, design.obscurationRatio, beam, beamRadiusM, biasM, design.fadeProbability);
+      scintillationIndex = wave.scintillationIndex;
+      scintillationFadeMarginDb = wave.fadeMarginDb;
+    } else {
+      // Spherical wave, aperture averaged, gamma-gamma at p: divergent FSO beams have Θ ≈ 0 at the
+      // receiver and behave as spherical waves.
+      scintillationIndex = apertureAveragedScintillationIndexFast(design.wavelengthM, rangeM, design.cn2, design.apertureDiameterM);
+      scintillationFadeMarginDb = apertureAveragedFadeMarginDb(design.wavelengthM, rangeM, design.cn2, design.apertureDiameterM, design.fadeProbability);
+    }
   }
   scratch.beamRadiusAtReceiverM = beamRadiusM;
+  scratch.longTermBeamRadiusM = captureBeamRadiusM;
+  scratch.beamWanderRmsM = beamWanderRmsM;
+  scratch.turbulenceBeamSpreadLossDb = turbulenceBeamSpreadLossDb;
   scratch.captureFraction = captureFraction;
   scratch.geometricLossDb = geometricLossDb;
   scratch.atmosphericLossDb = atmosphericLossDb;

@@ -6,12 +6,14 @@
  */
 import { z } from 'zod';
 import { finiteNumber } from './fields.js';
+import { TURBULENCE_MODELS } from './link-design.schema.js';
 
 /** Stable keys of the budget terms, in the order they appear. */
 export const BUDGET_TERM_KEYS = [
   'transmitPower',
   'transmitOptics',
   'geometricSpread',
+  'turbulenceBeamSpread',
   'atmosphericAttenuation',
   'pointingLoss',
   'receiveOptics',
@@ -68,6 +70,15 @@ export const LinkBudgetSchema = z.object({
   rayleighRangeM: finiteNumber(),
   /** 1/e² beam radius at the receiver W(L) [m] */
   beamRadiusAtReceiverM: finiteNumber(),
+  /**
+   * turbulence model the budget used. Optional here (and in the two fields below) so that budgets
+   * stored by engines before 0.3 still parse: those were computed with the spherical wave.
+   */
+  turbulenceModel: z.enum(TURBULENCE_MODELS).optional(),
+  /** long-term (turbulence-spread) 1/e² beam radius W_LT [m]; equals beamRadiusAtReceiverM for the spherical wave or Cn² = 0 */
+  longTermBeamRadiusM: finiteNumber().optional(),
+  /** radial rms beam wander √⟨r_c²⟩ [m], contained in W_LT (for information); 0 for the spherical wave */
+  beamWanderRmsM: finiteNumber().optional(),
   /** fraction of the beam power inside the (annular) receive aperture, centred, in [0, 1] (0 only by underflow, when the obscuration blocks the beam) */
   captureFraction: finiteNumber(),
   /** geometric (capture) loss, positive [dB] */

@@ -21,7 +21,14 @@ function designFromInputs(inputs: ReferenceInputs): LinkDesignInput {
     pointing: { jitterSigmaPerAxisRad: inputs.jitter_sigma_per_axis_rad, staticErrorRad: inputs.static_pointing_error_rad },
     // LB-03 has no visibility of its own (the climatology supplies it); 10 km is a placeholder the
     // availability routine does not read.
-    atmosphere: { model: 'kim', visibilityM: inputs.visibility_m ?? 10_000, cn2: inputs['Cn2_m^-2/3'] },
+    // The LB cases' chain is the spherical wave (LB-01-exact-pointing says so with turbulence_model;
+    // LB-01, LB-02 and LB-03 predate the Gaussian-beam model).
+    atmosphere: {
+      model: 'kim',
+      visibilityM: inputs.visibility_m ?? 10_000,
+      cn2: inputs['Cn2_m^-2/3'],
+      turbulenceModel: (inputs.turbulence_model as 'gaussian-beam' | 'spherical-wave' | undefined) ?? 'spherical-wave',
+    },
     scintillation: { include: inputs.include_scintillation ?? true, probability: inputs.fade_probability },
   };
 }
