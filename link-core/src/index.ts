@@ -79,11 +79,13 @@ export { wavenumberRadPerM, rytovVariance, rytovVarianceFast, fresnelZoneM, cohe
 export type { WaveModel, RytovVarianceInput, CoherenceInput, TurbulenceRegime } from './turbulence/rytov.js';
 export { normalisedApertureSquared, gammaGammaParameters, scintillationIndexAllRegimes, apertureAveragedScintillationIndex, weakApertureAveraging, weakApertureAveragingNumerical, apertureAveragedFadeMarginDb, apertureAveragedScintillationIndexFast } from './turbulence/scintillation.js';
 export type { GammaGammaParameters, GammaGammaParametersInput, WeakApertureAveraging } from './turbulence/scintillation.js';
-export { GAMMA_GAMMA_LOGNORMAL_SHAPE_LIMIT, gammaGammaCdf, gammaGammaPdf, gammaGammaCdfSeries, gammaGammaQuantile, fadeMarginGammaGammaDb, fadeMarginLognormalDb, fadeMarginDb } from './turbulence/fade-statistics.js';
+export { GAMMA_GAMMA_LOGNORMAL_SHAPE_LIMIT, GAMMA_GAMMA_LOGNORMAL_BLEND_START, gammaGammaCdf, gammaGammaPdf, gammaGammaCdfSeries, gammaGammaQuantile, fadeMarginGammaGammaDb, fadeMarginLognormalDb, fadeMarginDb } from './turbulence/fade-statistics.js';
 export type { FadeMarginInput } from './turbulence/fade-statistics.js';
 export { GAUSSIAN_BEAM_RYTOV_FORM_RATIO, gaussianBeamRytovRatioIntegral, gaussianBeamRytovRatio, gaussianBeamRytovRatioApproximate, gaussianBeamScintillationIndex } from './turbulence/gaussian-beam-scintillation.js';
 export { collimatedBeamWander, longTermBeamRadius } from './turbulence/beam-wander.js';
 export type { BeamWander, LongTermBeamRadius } from './turbulence/beam-wander.js';
+export { beamWaveAtReceiverFast, beamWaveScintillationFast, LONG_TERM_SPREAD_BRIDGE_EXPONENT } from './turbulence/beam-wave.js';
+export type { BeamWaveAtReceiver } from './turbulence/beam-wave.js';
 
 // Receiver (DOMAIN §7)
 export { PLANCK_CONSTANT_J_S, SPEED_OF_LIGHT_M_PER_S, ELEMENTARY_CHARGE_C, qFactorForBer, berForQFactor, qFactorDb, photonEnergyJ, photonsPerBit, idealResponsivityAPerW, receiverSensitivity, checkReceivedPower } from './receiver/sensitivity.js';

@@ -57,7 +57,7 @@ export const TERM_DESCRIPTIONS: Record<BudgetTermKey, TermDescription> = {
     label: 'Geometric spread (beam wider than the receive aperture)',
     unit: 'dB',
     method:
-      'Centred Gaussian capture η = exp(−2b²/W²) − exp(−2a²/W²) with W(L) of the launched beam: W² = W0²(1 + L/|F0|)² + (θd·L)², F0 = −W0/√(θ² − θd²), θd = M²λ/(πW0); collimated when θ ≤ θd',
+      'Centred Gaussian capture η = exp(−2b²/W²) − exp(−2a²/W²) with W(L) of the launched beam: W² = W0²(1 + L/|F0|)² + (θd·L)², F0 = −W0/√(θ² − θd²), θd = M²λ/(πW0); collimated when θ ≤ θd (W is continuous at that corner, its slope is not)',
     source: `Kogelnik H., Li T., Appl. Opt. 5(10), 1550–1567 (1966); ${ANDREWS_PHILLIPS}, ch. 4 (beam parameters Θ0, Λ0)`,
   },
   turbulenceBeamSpread: {
@@ -70,7 +70,7 @@ export const TERM_DESCRIPTIONS: Record<BudgetTermKey, TermDescription> = {
   atmosphericAttenuation: {
     label: 'Atmospheric attenuation (visibility)',
     unit: 'dB',
-    method: 'γ = 4.343·(3.91/V)·(λ/550 nm)^(−q(V)) dB/km over the path; visibility given as MOR (5 %) is first converted to the 2 % visibility, V2 = (ln 50/ln 20)·MOR = 1.30587·MOR',
+    method: 'γ = 4.343·(3.91/V)·(λ/550 nm)^(−q(V)) dB/km over the path, q(V) piecewise as published (a step in the attenuation at V = 50 km for Kim, at 6 and 50 km for Kruse); visibility given as MOR (5 %) is first converted to the 2 % visibility, V2 = (ln 50/ln 20)·MOR = 1.30587·MOR',
     source:
       'Kim I.I., McArthur B., Korevaar E., Proc. SPIE 4214, 26–37 (2001) (q of the Kim model); Kruse P.W. et al., "Elements of Infrared Technology", Wiley (1962) (q of the Kruse model); Koschmieder (1924) and WMO-No. 8 for the 2 %/5 % thresholds',
   },

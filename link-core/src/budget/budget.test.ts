@@ -220,6 +220,17 @@ describe('evaluateLink', () => {
     expect(Number.isFinite(outage.pointingLossDb)).toBe(true);
   });
 
+  it("names the published steps of the visibility models in the ledger (Kim at 50 km, Kruse at 6 and 50 km)", () => {
+    const keys = (model: 'kim' | 'kruse', visibilityM: number) =>
+      evaluateLink(variant((design) => (design.atmosphere = { ...design.atmosphere, model, visibilityM }))).checks.map((check) => check.key);
+    expect(keys('kim', 48_000)).toContain('published-model-step');
+    expect(keys('kim', 6_000)).not.toContain('published-model-step'); // Kim's q is continuous at 6 km
+    expect(keys('kruse', 6_200)).toContain('published-model-step');
+    expect(keys('kim', 20_000)).not.toContain('published-model-step');
+    const attenuation = evaluateLink(lb01).terms.find((t) => t.key === 'atmosphericAttenuation')!;
+    expect(attenuation.method).toMatch(/50 km/);
+  });
+
   it('gives the same margin through linkMarginAtRangeDb', () => {
     expect(linkMarginAtRangeDb(lb01, 2000)).toBeCloseTo(budget.linkMarginDb, 12);
   });

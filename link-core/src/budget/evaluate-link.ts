@@ -43,6 +43,14 @@ function collectChecks(design: ResolvedDesign, receivedPowerDbm: number, diffrac
       message: 'Visibility entered as MOR (5 % contrast) was converted to the 2 % visibility (× ln 50/ln 20 = 1.30587) before the attenuation model was applied.',
     });
   }
+  const step = publishedVisibilityStepKm(design);
+  if (step !== undefined) {
+    checks.push({
+      key: 'published-model-step',
+      severity: 'info',
+      message: `The visibility (${design.visibility2PercentKm.toFixed(1)} km, 2 % contrast) is near ${step} km, where the ${design.kruse ? 'Kruse' : 'Kim'} model's wavelength exponent changes by a published step: the attenuation, and the margin, jump there by design of that model.`,
+    });
+  }
   if (design.kruse && design.visibility2PercentKm <= 6) {
     checks.push({
       key: 'kruse-in-fog',
@@ -74,6 +82,20 @@ function collectChecks(design: ResolvedDesign, receivedPowerDbm: number, diffrac
   }
   return checks;
 }
+
+/**
+ * The published step of the visibility exponent within 10 % of the design's visibility: Kim's q(V)
+ * at 50 km, Kruse's at 6 and 50 km (the other Kim breakpoints are continuous).
+ * @see Kim, McArthur & Korevaar, Proc. SPIE 4214 (2001); Kruse et al. (1962).
+ */
+function publishedVisibilityStepKm(design: ResolvedDesign): number | undefined {
+  if (design.fogNumeratorPerKm > 0) return undefined;
+  const steps = design.kruse ? KRUSE_STEPS_KM : KIM_STEPS_KM;
+  for (const step of steps) if (Math.abs(design.visibility2PercentKm / step - 1) <= 0.1) return step;
+  return undefined;
+}
+const KIM_STEPS_KM = [50];
+const KRUSE_STEPS_KM = [6, 50];
 
 // evaluateLink resolves into this one object: everything read from it is copied into the budget.
 const scratchDesign = emptyResolvedDesign();

@@ -313,8 +313,8 @@ export function evaluateChain(design: ResolvedDesign, rangeM: number, attenuatio
       scintillationIndex = wave.scintillationIndex;
       scintillationFadeMarginDb = wave.fadeMarginDb;
     } else {
-      // Spherical wave, aperture averaged, gamma-gamma at p: divergent FSO beams have Θ ≈ 0 at the
-      // receiver and behave as spherical waves.
+    // Spherical wave, aperture averaged, gamma-gamma at p (DOMAIN §6.2, §6.5, §6.7): divergent FSO
+    // beams have Θ ≈ 0 at the receiver and behave as spherical waves.
       scintillationIndex = apertureAveragedScintillationIndexFast(design.wavelengthM, rangeM, design.cn2, design.apertureDiameterM);
       scintillationFadeMarginDb = apertureAveragedFadeMarginDb(design.wavelengthM, rangeM, design.cn2, design.apertureDiameterM, design.fadeProbability);
     }
