@@ -57,7 +57,9 @@ export type { OptimumTruncation, TransmitApertureForSpotInput, TransmitApertureF
 
 // Receive capture (DOMAIN §3)
 export { centredCaptureFraction, annularCaptureFraction, offsetCaptureFraction, captureFraction, geometricLossDb, smallApertureCaptureApproximation, faridHranilovicCapture, faridHranilovicCaptureFraction, topHatCaptureRatio, offsetForRelativeCapture, fieldOfViewCheck, logRicianAnnulusProbability, logCentredAnnularCapture, logOffsetAnnularCapture, logMeanAnnularCapture } from './capture/capture.js';
-export { exactMeanPointingLossDb, exactOutagePointingLossDb, ricianOutageRadius } from './pointing/exact-pointing.js';
+export { exactMeanPointingLossDb, exactOutagePointingLossDb, ricianOutageRadius, captureFallsFromCentre } from './pointing/exact-pointing.js';
+export { jointOutageProbability } from './budget/joint-outage.js';
+export type { JointOutage } from './budget/joint-outage.js';
 export type { CaptureFractionInput, FaridHranilovicCapture, TopHatCaptureInput, FieldOfViewInput, FieldOfViewCheck } from './capture/capture.js';
 
 // Pointing, jitter and building sway (DOMAIN §4)

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { requiredThresholdOverSigma } from '../pointing/pointing.js';
 import { ricianOutageRadius } from '../pointing/exact-pointing.js';
+import { normalQuantileOf } from '../turbulence/normal.js';
 import { logOffsetAnnularCapture } from '../capture/capture.js';
 import { LinkDesignSchema, type LinkDesignInput } from '../schemas/link-design.schema.js';
 import { LinkBudgetSchema } from '../schemas/link-budget.schema.js';
@@ -170,7 +171,7 @@ describe('evaluateLink', () => {
     expect(noJitter.pointingLossDb).toBeCloseTo(8.6859 * ((100e-6 * 2000) / noJitter.beamRadiusAtReceiverM) ** 2, 3);
   });
 
-  it('finds the outage radius of a bias of many σ by the exact root, and by the Gaussian limit beyond 1e4 σ', () => {
+  it('finds the outage radius of a bias of many σ by the exact root, and by the large-bias expansion beyond 1000 σ', () => {
     const design = variant((d) => (d.pointing = { jitterSigmaPerAxisRad: 1e-6, staticErrorRad: 150e-6, outageProbability: 1e-3 }));
     const exactRadiusM = requiredThresholdOverSigma({ outageProbability: 1e-3, staticOffsetOverSigma: 150 }) * 1e-6 * 2000;
     expect(Math.abs(ricianOutageRadius(1e-6 * 2000, 150e-6 * 2000, 1e-3) / exactRadiusM - 1)).toBeLessThan(1e-12);
@@ -178,9 +179,21 @@ describe('evaluateLink', () => {
     const w = budgetOutage.beamRadiusAtReceiverM;
     const exactLossDb = -(10 / Math.LN10) * (logOffsetAnnularCapture(w, 0.05, 0, exactRadiusM) - Math.log(-Math.expm1(-2 * (0.05 / w) ** 2)));
     expect(Math.abs(budgetOutage.pointingLossDb / exactLossDb - 1)).toBeLessThan(1e-9);
-    // 1e4 σ: the Gaussian limit ν − σ·Φ⁻¹(p) + σ²/(2ν) against the exact root (quadrature Q1)
-    const exactFar = ricianOutageRadius(1, 1e4, 1e-3);
-    expect(Math.abs((1e4 + 3.090232306167813 + 0.5e-4) / exactFar - 1)).toBeLessThan(1e-11);
+    // from 1000 σ the budget uses the large-bias expansion ν + σz + σ²/(2ν) − σ³z/(4ν²), z = −Φ⁻¹(p):
+    // against the exact root (quadrature Q1), through the budget's own outage term
+    for (const nu of [1000, 3000]) {
+      for (const p of [1e-9, 1e-3, 0.3]) {
+        const exactFar = ricianOutageRadius(1, nu, p);
+        const z = -normalQuantileOf(p);
+        expect(Math.abs((nu + z + 0.5 / nu - z / (4 * nu * nu)) / exactFar - 1)).toBeLessThan(1e-10);
+      }
+    }
+    const far = variant((d) => (d.pointing = { jitterSigmaPerAxisRad: 0.05e-6, staticErrorRad: 100e-6, outageProbability: 1e-3 }));
+    const farBudget = evaluateLink(far);
+    const farRadiusM = ricianOutageRadius(0.05e-6 * 2000, 100e-6 * 2000, 1e-3);
+    const farExactLossDb =
+      -(10 / Math.LN10) * (logOffsetAnnularCapture(farBudget.beamRadiusAtReceiverM, 0.05, 0, farRadiusM) - Math.log(-Math.expm1(-2 * (0.05 / farBudget.beamRadiusAtReceiverM) ** 2)));
+    expect(Math.abs(farBudget.pointingLossDb / farExactLossDb - 1)).toBeLessThan(1e-9);
   });
 
   it('makes the pointing term a gain when an offset moves power onto an obscured aperture', () => {
@@ -229,6 +242,23 @@ describe('evaluateLink', () => {
     expect(keys('kim', 20_000)).not.toContain('published-model-step');
     const attenuation = evaluateLink(lb01).terms.find((t) => t.key === 'atmosphericAttenuation')!;
     expect(attenuation.method).toMatch(/50 km/);
+  });
+
+  it('warns when the mean pointing loss hides outages, and only in mean mode', () => {
+    // jitter 400 µrad on a 2 m beam at 2 km: σ = 0.8 m, a mean loss that looks mild
+    const jittery = variant((design) => (design.pointing = { jitterSigmaPerAxisRad: 400e-6, staticErrorRad: 100e-6 }));
+    const warned = evaluateLink(jittery);
+    const check = warned.checks.find((c) => c.key === 'pointing-mean-hides-outage');
+    expect(check?.severity).toBe('warning');
+    const atOutage = evaluateLink({ ...jittery, pointing: { ...jittery.pointing, outageProbability: 1e-3 } });
+    expect(atOutage.pointingLossDb - warned.pointingLossDb).toBeGreaterThan(1);
+    // the message states the loss at 1e-3, or a lower bound of it ("at least"), never more than it
+    const stated = Number(/is (?:at least )?(\d+\.\d+) dB/.exec(check!.message)![1]);
+    expect(stated).toBeLessThanOrEqual(atOutage.pointingLossDb + 0.005);
+    expect(stated - warned.pointingLossDb).toBeGreaterThan(1);
+    expect(check?.message).toMatch(/outage probability/);
+    expect(atOutage.checks.map((c) => c.key)).not.toContain('pointing-mean-hides-outage');
+    expect(budget.checks.map((c) => c.key)).not.toContain('pointing-mean-hides-outage');
   });
 
   it('gives the same margin through linkMarginAtRangeDb', () => {

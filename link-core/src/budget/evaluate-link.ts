@@ -7,7 +7,10 @@ import type { BudgetCheck, BudgetTerm, BudgetTermKey, LinkBudget } from '../sche
 import { formatZodIssues } from '../schemas/format-zod-issues.js';
 import { LinkDesignSchema, type LinkDesignInput } from '../schemas/link-design.schema.js';
 import { BEAM_WAVE_FADE_DESCRIPTION, FOG_ATTENUATION_DESCRIPTION, POINTING_OUTAGE_DESCRIPTION, TERM_DESCRIPTIONS, type TermDescription } from './budget-terms.js';
-import { emptyResolvedDesign, evaluateChain, resolveDesign, resolveDesignInto, specificAttenuationDbPerKm, type ResolvedDesign } from './link-chain.js';
+import { emptyResolvedDesign, evaluateChain, resolveDesign, resolveDesignInto, specificAttenuationDbPerKm, type ChainResult, type ResolvedDesign } from './link-chain.js';
+import { logOffsetAnnularCapture } from '../capture/capture.js';
+import { captureFallsFromCentre, exactOutagePointingLossDb } from '../pointing/exact-pointing.js';
+import { normalQuantileOf } from '../turbulence/normal.js';
 
 // The description is passed in (not looked up by key) so that each call site stays monomorphic.
 function term(key: BudgetTermKey, description: TermDescription, valueDb: number): BudgetTerm {
@@ -20,8 +23,16 @@ function diffractionHalfAngle(design: ResolvedDesign): number {
   return (design.m2 * design.wavelengthM) / (Math.PI * design.apertureBeamRadiusM);
 }
 
-function collectChecks(design: ResolvedDesign, receivedPowerDbm: number, diffractionRad: number): BudgetCheck[] {
+function collectChecks(design: ResolvedDesign, receivedPowerDbm: number, diffractionRad: number, chain: ChainResult): BudgetCheck[] {
   const checks: BudgetCheck[] = [];
+  const hiddenOutage = hiddenPointingOutage(design, chain);
+  if (hiddenOutage !== undefined) {
+    checks.push({
+      key: 'pointing-mean-hides-outage',
+      severity: 'warning',
+      message: `The mean pointing loss (${chain.pointingLossDb.toFixed(2)} dB) hides outages: the pointing loss exceeded 0.1 % of the time is ${hiddenOutage.exact ? '' : 'at least '}${hiddenOutage.lossDb.toFixed(2)} dB. Budget the pointing at an outage probability (for example 1e-3) to hold margin against it.`,
+    });
+  }
   if (design.halfAngleDivergenceRad > 0 && design.halfAngleDivergenceRad <= diffractionRad) {
     checks.push({
       key: 'divergence-below-diffraction-limit',
@@ -96,6 +107,42 @@ function publishedVisibilityStepKm(design: ResolvedDesign): number | undefined {
 }
 const KIM_STEPS_KM = [50];
 const KRUSE_STEPS_KM = [6, 50];
+
+/** Probability at which the mean-mode pointing term is compared with the loss it hides. */
+const HIDDEN_OUTAGE_PROBABILITY = 1e-3;
+/** The mean hides an outage when the loss at that probability exceeds it by more than this [dB]. */
+const HIDDEN_OUTAGE_EXCESS_DB = 1;
+const RAYLEIGH_RADIUS_AT_HIDDEN_OUTAGE = Math.sqrt(-2 * Math.log(HIDDEN_OUTAGE_PROBABILITY));
+
+/**
+ * In mean mode, when the pointing loss exceeded with probability 1e-3 is more than 1 dB above the
+ * mean loss: that loss, or a lower bound of it; undefined otherwise. Where C falls with the offset
+ * the radius r_p exceeded with 1e-3 lies in [max(3.717σ, ν + 3.090σ), ν + 3.717σ] (R is
+ * stochastically larger than without bias; P(R > ν + t) ≥ P(X₁ > t); |ν + X| ≤ ν + |X|), so two
+ * captures at the ends decide most designs without the quantile: the warning then states the loss
+ * at the lower end as "at least". Only between them (or where C rises) is the exact quantile solved.
+ */
+function hiddenPointingOutage(design: ResolvedDesign, chain: ChainResult): { lossDb: number; exact: boolean } | undefined {
+  if (!Number.isNaN(design.pointingOutageAngleRad)) return undefined;
+  const jitterM = design.jitterSigmaPerAxisRad * design.rangeM;
+  if (jitterM === 0) return undefined;
+  const biasM = design.staticErrorRad * design.rangeM;
+  const beamRadiusM = chain.longTermBeamRadiusM;
+  const apertureRadiusM = design.apertureDiameterM / 2;
+  const obscurationRadiusM = apertureRadiusM * design.obscurationRatio;
+  if (captureFallsFromCentre(beamRadiusM, apertureRadiusM, obscurationRadiusM)) {
+    const logCentre = -(chain.geometricLossDb + chain.turbulenceBeamSpreadLossDb) / DB_PER_NEPER;
+    const lossAt = (offsetM: number) => -DB_PER_NEPER * (logOffsetAnnularCapture(beamRadiusM, apertureRadiusM, obscurationRadiusM, offsetM) - logCentre);
+    const upperLossDb = lossAt(biasM + RAYLEIGH_RADIUS_AT_HIDDEN_OUTAGE * jitterM);
+    if (!(upperLossDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB)) return undefined;
+    const lowerLossDb = lossAt(Math.max(RAYLEIGH_RADIUS_AT_HIDDEN_OUTAGE * jitterM, biasM + NORMAL_RADIUS_AT_HIDDEN_OUTAGE * jitterM));
+    if (lowerLossDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB) return { lossDb: lowerLossDb, exact: false };
+  }
+  const lossDb = exactOutagePointingLossDb(beamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM, HIDDEN_OUTAGE_PROBABILITY);
+  return lossDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB ? { lossDb, exact: true } : undefined;
+}
+const NORMAL_RADIUS_AT_HIDDEN_OUTAGE = -normalQuantileOf(HIDDEN_OUTAGE_PROBABILITY);
+const DB_PER_NEPER = 10 / Math.LN10;
 
 // evaluateLink resolves into this one object: everything read from it is copied into the budget.
 const scratchDesign = emptyResolvedDesign();
@@ -199,7 +246,7 @@ export function evaluateLink(design: LinkDesignInput): LinkBudget {
     scintillationFadeMarginDb: chain.scintillationFadeMarginDb,
     systemMarginDb: resolved.systemMarginDb,
     linkMarginDb: chain.linkMarginDb,
-    checks: collectChecks(resolved, chain.receivedPowerDbm, diffractionRad),
+    checks: collectChecks(resolved, chain.receivedPowerDbm, diffractionRad, chain),
   };
 }
 

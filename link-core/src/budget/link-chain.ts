@@ -69,16 +69,19 @@ export interface ResolvedDesign {
  */
 function outageAngleRad(jitterSigmaPerAxisRad: number, staticErrorRad: number, outageProbability: number): number {
   if (jitterSigmaPerAxisRad > 0 && staticErrorRad / jitterSigmaPerAxisRad > LARGE_OFFSET_OVER_SIGMA) {
-    // A bias of very many σ: R = |ν + x + i·y| ≈ ν + x + y²/(2ν), so r_p ≈ ν − σ·Φ⁻¹(p) + σ²/(2ν)
-    // (derived; the next term is of order σ³/ν², below 1e-12 of r_p here). Written without ν/σ,
-    // which overflows for a vanishing jitter.
-    return staticErrorRad - jitterSigmaPerAxisRad * normalQuantileOf(outageProbability) + (jitterSigmaPerAxisRad / staticErrorRad) * (jitterSigmaPerAxisRad / 2);
+    // A bias of very many σ: R = |ν + x + i·y| ≈ ν + x + y²/(2ν) − x·y²/(2ν²), whose p-quantile is
+    // r_p ≈ ν + σz + σ²/(2ν) − σ³z/(4ν²) with z = −Φ⁻¹(p) (derived: y² at its mean in the third
+    // term, its variance σ⁴/(2ν²) widening the normal quantile in the fourth; within 1e-10 of the
+    // exact root from 1000σ, budget.test.ts). Written without ν/σ, which overflows for a vanishing jitter.
+    const z = -normalQuantileOf(outageProbability);
+    const ratio = jitterSigmaPerAxisRad / staticErrorRad;
+    return staticErrorRad + jitterSigmaPerAxisRad * (z + ratio / 2 - (z * ratio * ratio) / 4);
   }
   return ricianOutageRadius(jitterSigmaPerAxisRad, staticErrorRad, outageProbability);
 }
 
 /** Above this bias/jitter ratio the outage radius uses the Gaussian limit of the Rician tail. */
-const LARGE_OFFSET_OVER_SIGMA = 1e4;
+const LARGE_OFFSET_OVER_SIGMA = 1000;
 
 /**
  * Numerator of Al Naboulsi's fog extinction β = c/V (λ in µm, V in km): advection

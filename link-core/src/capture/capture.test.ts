@@ -120,6 +120,21 @@ describe('logRicianAnnulusProbability (exact annular capture under an offset)', 
     );
   });
 
+  it('keeps to the quadrature where offsets of tens of s take the rescaled series (μ + y > 650)', () => {
+    fc.assert(
+      fc.property(fc.double({ min: 36, max: 60, noNaN: true }), fc.double({ min: -3, max: 3, noNaN: true }), fc.double({ min: 0.5, max: 4, noNaN: true }), (offset, shift, width) => {
+        const inner = Math.max(0, offset + shift - width);
+        const outer = offset + shift + width;
+        const expected = Math.log(riceByQuadrature(offset, 1, inner, outer));
+        return Math.abs(logRicianAnnulusProbability(offset, 1, inner, outer) - expected) <= 1e-9 * Math.max(1, Math.abs(expected));
+      }),
+    );
+    // a small aperture far from the beam: ln P ≈ −(√μ − √y)² stays finite and close to the Gaussian tail
+    const far = logRicianAnnulusProbability(200, 1, 0, 1);
+    expect(far).toBeLessThan(-19000);
+    expect(far).toBeGreaterThan(-20200);
+  });
+
   it('switches to the log domain where the probability leaves the doubles, continuously', () => {
     // an obscuration of 40 s hides the beam: ln P ≈ −800, which the linear series cannot hold
     const deep = logRicianAnnulusProbability(2, 1, 40, 50);

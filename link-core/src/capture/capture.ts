@@ -6,7 +6,7 @@
  */
 import erf from '@stdlib/math-base-special-erf';
 import { besselI0Scaled } from '../numeric/bessel.js';
-import { marcumQ1Complement, noncentralChiSquare2TailsFast } from '../numeric/marcum-q.js';
+import { logNoncentralChiSquare2TailsScaled, marcumQ1Complement, noncentralChiSquare2TailsFast } from '../numeric/marcum-q.js';
 import { integrate } from '../numeric/quadrature.js';
 import { findRootBrent } from '../numeric/root-finding.js';
 import { fractionToLossDb } from '../units/decibels.js';
@@ -262,6 +262,22 @@ function logRicianAnnulusByQuadrature(offset: number, inner: number, outer: numb
   return Math.log(sum) - shift;
 }
 
+/**
+ * ln P(b < |Y| ≤ a) in units of s from the log tails of the rescaled series (differenced in the
+ * log domain); NaN where that series does not apply.
+ */
+function logRicianAnnulusByScaledSeries(noncentrality: number, inner: number, outer: number): number {
+  const outerTails = logNoncentralChiSquare2TailsScaled(outer * outer, noncentrality);
+  const outerLogCdf = outerTails.logCdf;
+  const outerLogSf = outerTails.logSf;
+  if (inner === 0) return outerLogCdf;
+  const innerTails = logNoncentralChiSquare2TailsScaled(inner * inner, noncentrality);
+  const mean = noncentrality + 2; // the smaller tails sit on either side of y = μ + 1
+  if (inner * inner >= mean) return innerTails.logSf + Math.log1p(-Math.exp(outerLogSf - innerTails.logSf));
+  if (outer * outer < mean) return outerLogCdf + Math.log1p(-Math.exp(innerTails.logCdf - outerLogCdf));
+  return Math.log1p(-Math.exp(innerTails.logCdf) - Math.exp(outerLogSf));
+}
+
 /** Below this probability the series' difference is replaced by the log-domain quadrature. */
 const SMALLEST_LINEAR_PROBABILITY = 1e-250;
 
@@ -303,6 +319,9 @@ export function logRicianAnnulusProbability(offsetM: number, sigmaM: number, inn
     probability = inner * inner >= noncentrality + 2 ? innerTails.sf - outerSf : outerCdf - innerTails.cdf;
   }
   if (probability > SMALLEST_LINEAR_PROBABILITY) return Math.log(probability);
+  const logScaled = logRicianAnnulusByScaledSeries(noncentrality, inner, outer);
+  // finite unless one of its plain factors underflowed (offsets of thousands of s): integrate then
+  if (Number.isFinite(logScaled)) return logScaled;
   return logRicianAnnulusByQuadrature(offset, inner, outer);
 }
 

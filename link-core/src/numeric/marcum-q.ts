@@ -134,6 +134,101 @@ export function noncentralChiSquare2TailsFast(x: number, noncentrality: number):
   return fastTails;
 }
 
+/** Log tails of {@link logNoncentralChiSquare2TailsScaled}. */
+export interface LogTails {
+  /** ln P(X ≤ x) */
+  logCdf: number;
+  /** ln P(X > x) */
+  logSf: number;
+}
+const logTails: LogTails = { logCdf: 0, logSf: 0 };
+/** Past this the plain (unscaled) factor of the scaled series would leave the doubles. */
+const SCALED_SERIES_PLAIN_LIMIT = 600;
+const SCALED_SERIES_TERM_LIMIT = 1e6;
+const RESCALE = 1e-250;
+const LOG_RESCALE = 250 * Math.LN10;
+
+/**
+ * Natural logs of both tails of the noncentral chi-square (2 degrees of freedom), by the same
+ * positive-term series as {@link noncentralChiSquare2TailsFast} summed with a running rescale, so
+ * that it holds where e^(−μ−y) leaves the doubles (offsets or radii of tens to thousands of σ):
+ * the smaller tail keeps full relative precision however small. Needs y ≤ 600 for the cdf branch
+ * (y < μ + 1) and μ ≤ 600 for the sf branch, and μ + y ≤ 1e6; NaN tails outside, or −∞ where a
+ * plain factor underflowed (the caller integrates instead).
+ * Returns a shared object that the next call overwrites.
+ * @see Johnson, Kotz & Balakrishnan (1995), ch. 29 (Poisson mixture); the reordering is derived.
+ */
+export function logNoncentralChiSquare2TailsScaled(x: number, noncentrality: number): LogTails {
+  const mu = noncentrality / 2;
+  const y = x / 2;
+  if (!(mu + y <= SCALED_SERIES_TERM_LIMIT)) {
+    // about √(μy) terms: past this the quadrature is the cheaper path
+    logTails.logCdf = Number.NaN;
+    logTails.logSf = Number.NaN;
+    return logTails;
+  }
+  if (y < mu + 1) {
+    if (!(y <= SCALED_SERIES_PLAIN_LIMIT) || y === 0) {
+      logTails.logCdf = y === 0 ? -Infinity : Number.NaN;
+      logTails.logSf = y === 0 ? 0 : Number.NaN;
+      return logTails;
+    }
+    let poissonMu = 1;
+    let cdfMu = 1;
+    let poissonY = 1;
+    let sum = 0;
+    let logScale = 0;
+    for (let i = 1; i < 1_000_000; i++) {
+      poissonY *= y / i;
+      const term = poissonY * cdfMu;
+      sum += term;
+      const growth = y * (i + mu);
+      const room = i * (i + 1) - growth;
+      if (room > 0 && term * growth <= 1e-17 * room * sum) break;
+      poissonMu *= mu / i;
+      cdfMu += poissonMu;
+      if (cdfMu > 1e250) {
+        cdfMu *= RESCALE;
+        poissonMu *= RESCALE;
+        sum *= RESCALE;
+        logScale += LOG_RESCALE;
+      }
+    }
+    logTails.logCdf = Math.log(sum) + logScale - mu - y;
+    logTails.logSf = Math.log1p(-Math.exp(logTails.logCdf));
+    return logTails;
+  }
+  if (!(mu <= SCALED_SERIES_PLAIN_LIMIT)) {
+    logTails.logCdf = Number.NaN;
+    logTails.logSf = Number.NaN;
+    return logTails;
+  }
+  let poissonMu = 1;
+  let poissonY = 1;
+  let cdfY = 1;
+  let sum = 1;
+  let logScale = 0;
+  for (let j = 1; j < 1_000_000; j++) {
+    poissonMu *= mu / j;
+    poissonY *= y / j;
+    cdfY += poissonY;
+    const term = poissonMu * cdfY;
+    sum += term;
+    const growth = mu * (j + 1 + y);
+    const room = (j + 1) * (j + 1) - growth;
+    if (room > 0 && term * growth <= 1e-17 * room * sum) break;
+    if (cdfY > 1e250) {
+      cdfY *= RESCALE;
+      poissonY *= RESCALE;
+      sum *= RESCALE;
+      logScale += LOG_RESCALE;
+    }
+  }
+  logTails.logSf = Math.log(sum) + logScale - mu - y;
+  logTails.logCdf = Math.log1p(-Math.exp(logTails.logSf));
+  return logTails;
+}
+
 // The Rice density is about 1σ wide: split long intervals into panels of at most 2σ so that no
 // narrow peak can fall between the nodes of a single coarse panel.
 function integrateInUnitPanels(density: (t: number) => number, lower: number, upper: number): number {

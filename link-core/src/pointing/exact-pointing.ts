@@ -9,6 +9,8 @@ import { marcumQ1, marcumQ1Complement, noncentralChiSquare2TailsFast } from '../
 import { findRootBrent } from '../numeric/root-finding.js';
 import { DB_PER_NATURAL_LOG_POWER } from '../units/constants.js';
 import { rayleighThresholdOverSigma } from './pointing.js';
+import { besselI0Scaled } from '../numeric/bessel.js';
+import { normalQuantileOf } from '../turbulence/normal.js';
 
 /**
  * Mean pointing loss, −10·log10(E[C(R)]/C(0)), with C the exact annular capture and R the Rician
@@ -32,7 +34,7 @@ export function exactMeanPointingLossDb(beamRadiusM: number, apertureRadiusM: nu
 
 /**
  * Radius r_p exceeded with probability p by the Rician radial error: Q1(ν/σ, r_p/σ) = p, solved by
- * Brent's method on ln Q1 to 1e-13 relative (the Rayleigh closed form σ·√(−2 ln p) when ν = 0; ν
+ * safeguarded Newton steps on ln Q1 (slope from the Rice density) to 1e-13 relative (the Rayleigh closed form σ·√(−2 ln p) when ν = 0; ν
  * itself when σ = 0).
  *
  * @param jitterSigmaPerAxisM σ [m or rad], ≥ 0
@@ -47,21 +49,48 @@ export function ricianOutageRadius(jitterSigmaPerAxisM: number, staticOffsetM: n
   const rayleigh = rayleighThresholdOverSigma(outageProbability);
   if (offset === 0) return rayleigh * jitterSigmaPerAxisM;
   const logP = Math.log(outageProbability);
-  // |ν + X| ≤ ν + |X|, so P(R > ν + t) ≤ exp(−t²/2): the root lies below ν/σ + √(−2 ln p); and
-  // above ν/σ − √(−2 ln p) by the same bound on the other side (the tail P(R > r) ≥ P(X₁ > r − ν)).
-  const upper = offset + rayleigh + 1e-9;
-  const lower = Math.max(0, offset - rayleigh - 1);
+  // Bracket: R is stochastically larger than without bias (r_p ≥ √(−2 ln p)); P(R > ν + t) ≥
+  // P(X₁ > t) gives r_p ≥ ν − Φ⁻¹(p); and |ν + X| ≤ ν + |X| gives r_p ≤ ν + √(−2 ln p) (σ units).
+  let lower = Math.max(rayleigh, offset - normalQuantileOf(outageProbability)) * (1 - 1e-12);
+  let upper = (offset + rayleigh) * (1 + 1e-12);
   const noncentrality = offset * offset;
-  const residual = (threshold: number): number => {
+  const logSurvival = (threshold: number): number => {
     // the allocation-free series where it applies, the general Q1 (quadrature for large offsets) elsewhere
     const sf = noncentralChiSquare2TailsFast(threshold * threshold, noncentrality).sf;
-    return Math.log(sf === sf ? sf : marcumQ1(offset, threshold)) - logP;
+    return Math.log(sf === sf ? sf : marcumQ1(offset, threshold));
   };
-  return findRootBrent(residual, lower, upper, { xTolerance: 1e-14 * upper }) * jitterSigmaPerAxisM;
+  // Newton on ln Q1(a, r) − ln p (slope −f_Rice(r)/Q1), kept inside the bracket by bisection.
+  // Start at the midpoint, or for a large bias at its Gaussian limit ν − Φ⁻¹(p) + 1/(2ν) (σ units),
+  // which is already close: one or two Newton steps then reach the root.
+  const gaussianLimit = offset - normalQuantileOf(outageProbability) + 0.5 / offset;
+  let r = offset > 10 && gaussianLimit > lower && gaussianLimit < upper ? gaussianLimit : 0.5 * (lower + upper);
+  for (let i = 0; i < 100; i++) {
+    const residual = logSurvival(r) - logP;
+    if (residual > 0) lower = r;
+    else upper = r;
+    const density = r * Math.exp(-0.5 * (r - offset) * (r - offset)) * besselI0Scaled(offset * r);
+    const slope = -density / Math.exp(residual + logP);
+    let next = r - residual / slope;
+    if (!(next > lower && next < upper)) next = 0.5 * (lower + upper);
+    if (Math.abs(next - r) <= 1e-13 * r || upper - lower <= 1e-13 * upper) {
+      r = next;
+      break;
+    }
+    r = next;
+  }
+  return r * jitterSigmaPerAxisM;
 }
 
-/** True when ln C(r) has a local maximum at r = 0 (C falls with the offset). */
-function captureFallsFromCentre(beamRadiusM: number, apertureRadiusM: number, obscurationRadiusM: number): boolean {
+/**
+ * True when the exact annular capture C(r) falls from its centred value as the offset grows (always
+ * without obscuration); false where a large obscuration makes C rise first.
+ * @param beamRadiusM W [m], > 0
+ * @param apertureRadiusM a [m], > b
+ * @param obscurationRadiusM b [m], ≥ 0
+ * @returns whether C has its maximum at r = 0
+ * @see derived from the sign of C''(0).
+ */
+export function captureFallsFromCentre(beamRadiusM: number, apertureRadiusM: number, obscurationRadiusM: number): boolean {
   if (obscurationRadiusM === 0) return true;
   // C''(0) ∝ b²·exp(−2b²/W²) − a²·exp(−2a²/W²) (the Laplacian of the beam profile integrated over
   // the annulus, derived): C rises with the offset when the obscuration rim is the brighter one.

@@ -147,7 +147,8 @@ export function beamWaveAtReceiverFast(
  * @param beamRadiusM free-space W [m]
  * @param offAxisOffsetM static bias at the receiver ν [m], ≥ 0
  * @param probability fade probability p in (0, 1), or NaN to skip the margin
- * @returns σ_I²(D) in `scintillationIndex` and the margin [dB] in `fadeMarginDb`, in a shared object
+ * @returns σ_I²(D) in `scintillationIndex`, the margin [dB] in `fadeMarginDb` and the gamma-gamma
+ *   α, β (Infinity without turbulence), in a shared object
  * @see Andrews & Phillips (2005), ch. 8 (σ_B², off-axis radial term 4.42σ_R²Λ^(5/6)r²/W²), ch. 9–10
  *   (all-regime and aperture-averaged log variances) [from memory]; Al-Habash, Andrews & Phillips,
  *   Opt. Eng. 40(8), 1554–1562 (2001) (gamma-gamma).
@@ -161,11 +162,13 @@ export function beamWaveScintillationFast(
   beamRadiusM: number,
   offAxisOffsetM: number,
   probability: number,
-): { scintillationIndex: number; fadeMarginDb: number } {
+): { scintillationIndex: number; fadeMarginDb: number; alpha: number; beta: number } {
   const rytov = beam.planeRytovVariance;
   if (rytov === 0) {
     scintillation.scintillationIndex = 0;
     scintillation.fadeMarginDb = 0;
+    scintillation.alpha = Infinity;
+    scintillation.beta = Infinity;
     return scintillation;
   }
   const onAxis = rytov * gaussianBeamRytovRatio(beam.theta, beam.lambda);
@@ -179,8 +182,10 @@ export function beamWaveScintillationFast(
   const largeScale = (0.49 * weakIndex) / largeDenominator;
   const smallScale = (0.51 * weakIndex * Math.pow(1 + 0.69 * s125, -5 / 6)) / (1 + 0.9 * apertureD2 + 0.62 * apertureD2 * s125);
   scintillation.scintillationIndex = Math.expm1(largeScale + smallScale);
+  scintillation.alpha = 1 / Math.expm1(largeScale);
+  scintillation.beta = 1 / Math.expm1(smallScale);
   scintillation.fadeMarginDb = Number.isNaN(probability) ? 0 : fadeMarginGammaGammaDb(1 / Math.expm1(largeScale), 1 / Math.expm1(smallScale), probability);
   return scintillation;
 }
 
-const scintillation = { scintillationIndex: 0, fadeMarginDb: 0 };
+const scintillation = { scintillationIndex: 0, fadeMarginDb: 0, alpha: Infinity, beta: Infinity };
