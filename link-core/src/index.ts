@@ -118,6 +118,8 @@ export { besselI0Scaled } from './numeric/bessel.js';
 
 // Link budget (DOMAIN §8–§10)
 export { evaluateLink, linkMarginAtRangeDb } from './budget/evaluate-link.js';
+export { compareEngineVersions, currentEngineFigures, readStoredDesign, GAUSSIAN_BEAM_DEFAULT_SINCE, REQUIRED_LINK_MARGIN_DB } from './budget/engine-version.js';
+export type { CurrentEngineFigures } from './budget/engine-version.js';
 export { maxRange, maxRangeM, MAX_RANGE_SEARCH_M } from './budget/max-range.js';
 export type { MaxRangeResult } from './budget/max-range.js';
 export { availabilityFromClimatology, availabilityFromRecords, clearAirMarginDb } from './budget/availability.js';
