@@ -3,7 +3,7 @@ import { Link as RouterLink } from 'react-router-dom';
 import { Caption1, Title2, makeStyles, tokens } from '@fluentui/react-components';
 import { ChevronRightRegular } from '@fluentui/react-icons';
 import { paths } from '@/config/paths';
-import { formatDateTime } from '@/lib/format';
+import { formatDateTime, formatDb } from '@/lib/format';
 import { LinkStatusBadge } from '@/features/links/components/link-status-badge';
 import type { LinkDetail } from '@/features/links/api/types';
 
@@ -13,6 +13,8 @@ const useStyles = makeStyles({
   crumbLink: { color: tokens.colorBrandForeground1 },
   titleRow: { display: 'flex', alignItems: 'center', columnGap: tokens.spacingHorizontalM, flexWrap: 'wrap' },
   meta: { color: tokens.colorNeutralForeground3 },
+  engine: { display: 'block', color: tokens.colorNeutralForeground2 },
+  engineBelow: { display: 'block', color: tokens.colorPaletteDarkOrangeForeground1 },
   actions: { display: 'flex', columnGap: tokens.spacingHorizontalS, flexWrap: 'wrap' },
 });
 
@@ -47,6 +49,17 @@ export function LinkHeader({ link, section, actions }: { link: LinkDetail; secti
           {ends}Revision {link.revision} by {link.author.displayName}, {formatDateTime(link.revisedAt)}
           {link.approval ? ` · approved by ${link.approval.by.displayName}` : ''}
         </Caption1>
+        {link.currentEngine && (
+          // A revision computed by an older engine keeps its stored figures; the current engine's margin goes beside them.
+          <Caption1
+            className={link.currentEngine.belowRequiredMargin && (link.status === 'approved' || link.status === 'installed') ? styles.engineBelow : styles.engine}
+            data-testid="engine-comparison"
+          >
+            Computed by engine {link.linkCoreVersion}: margin {formatDb(link.linkMarginDb, { digits: 2 })}. Engine {link.currentEngine.linkCoreVersion} gives{' '}
+            {formatDb(link.currentEngine.linkMarginDb, { digits: 2 })} ({formatDb(link.currentEngine.marginChangeDb, { digits: 2, signed: true })}).
+            {link.currentEngine.belowRequiredMargin ? ' Below the required 3 dB with the current engine.' : ''}
+          </Caption1>
+        )}
       </div>
       {actions && <div className={styles.actions}>{actions}</div>}
     </div>
