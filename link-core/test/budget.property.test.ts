@@ -162,9 +162,10 @@ describe('link budget properties', () => {
           scintillation: { include: true, probability: 1e-3 },
         };
         const [near, far] = first < second ? [first, second] : [second, first];
-        // 1e-6 dB plus rounding of margins of millions of dB (a bias of 0.1 rad) in relative terms
+        // 1e-6 dB plus the rounding of margins of millions of dB (a pointing error of 0.1 rad: the
+        // exact capture of a beam thousands of radii off the aperture, in logarithms) in relative terms
         const nearMarginDb = linkMarginAtRangeDb(turbulent, near);
-        expect(linkMarginAtRangeDb(turbulent, far)).toBeLessThanOrEqual(nearMarginDb + 1e-6 + 1e-12 * Math.abs(nearMarginDb));
+        expect(linkMarginAtRangeDb(turbulent, far)).toBeLessThanOrEqual(nearMarginDb + 1e-6 + 1e-10 * Math.abs(nearMarginDb));
       }),
       { numRuns: 300 },
     );

@@ -118,9 +118,10 @@ const RAYLEIGH_RADIUS_AT_HIDDEN_OUTAGE = Math.sqrt(-2 * Math.log(HIDDEN_OUTAGE_P
  * In mean mode, when the pointing loss exceeded with probability 1e-3 is more than 1 dB above the
  * mean loss: that loss, or a lower bound of it; undefined otherwise. Where C falls with the offset
  * the radius r_p exceeded with 1e-3 lies in [max(3.717σ, ν + 3.090σ), ν + 3.717σ] (R is
- * stochastically larger than without bias; P(R > ν + t) ≥ P(X₁ > t); |ν + X| ≤ ν + |X|), so two
- * captures at the ends decide most designs without the quantile: the warning then states the loss
- * at the lower end as "at least". Only between them (or where C rises) is the exact quantile solved.
+ * stochastically larger than without bias; P(R > ν + t) ≥ P(X₁ > t); |ν + X| ≤ ν + |X|), so the
+ * small-receiver bound at the upper end, then the captures at the ends, decide most designs without
+ * the quantile: the warning then states the loss at the lower end as "at least". Only between them
+ * (or where C rises) is the exact quantile solved.
  */
 function hiddenPointingOutage(design: ResolvedDesign, chain: ChainResult): { lossDb: number; exact: boolean } | undefined {
   if (!Number.isNaN(design.pointingOutageAngleRad)) return undefined;
@@ -131,12 +132,17 @@ function hiddenPointingOutage(design: ResolvedDesign, chain: ChainResult): { los
   const apertureRadiusM = design.apertureDiameterM / 2;
   const obscurationRadiusM = apertureRadiusM * design.obscurationRatio;
   if (captureFallsFromCentre(beamRadiusM, apertureRadiusM, obscurationRadiusM)) {
+    const upperRadiusM = biasM + RAYLEIGH_RADIUS_AT_HIDDEN_OUTAGE * jitterM;
+    // For any centrally symmetric aperture C(r)/C(0) ≥ exp(−2r²/W²) (write the shifted Gaussian as
+    // g(x)·g(r)/g(0)·e^(4x·r/W²) and use e^t ≥ 1 + t; derived): the small-receiver loss bounds the
+    // exact one from above, so it rejects most designs without a series.
+    const smallReceiverBoundDb = 2 * DB_PER_NEPER * (upperRadiusM / beamRadiusM) ** 2;
+    if (!(smallReceiverBoundDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB)) return undefined;
     const logCentre = -(chain.geometricLossDb + chain.turbulenceBeamSpreadLossDb) / DB_PER_NEPER;
     const lossAt = (offsetM: number) => -DB_PER_NEPER * (logOffsetAnnularCapture(beamRadiusM, apertureRadiusM, obscurationRadiusM, offsetM) - logCentre);
-    const upperLossDb = lossAt(biasM + RAYLEIGH_RADIUS_AT_HIDDEN_OUTAGE * jitterM);
-    if (!(upperLossDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB)) return undefined;
     const lowerLossDb = lossAt(Math.max(RAYLEIGH_RADIUS_AT_HIDDEN_OUTAGE * jitterM, biasM + NORMAL_RADIUS_AT_HIDDEN_OUTAGE * jitterM));
     if (lowerLossDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB) return { lossDb: lowerLossDb, exact: false };
+    if (!(lossAt(upperRadiusM) - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB)) return undefined;
   }
   const lossDb = exactOutagePointingLossDb(beamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM, HIDDEN_OUTAGE_PROBABILITY);
   return lossDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB ? { lossDb, exact: true } : undefined;

@@ -5,6 +5,8 @@ import {
   captureFraction,
   faridHranilovicCaptureFraction,
   fieldOfViewCheck,
+  logCentredAnnularCapture,
+  logOffsetAnnularCapture,
   logRicianAnnulusProbability,
   offsetForRelativeCapture,
   topHatCaptureRatio,
@@ -146,5 +148,22 @@ describe('logRicianAnnulusProbability (exact annular capture under an offset)', 
     // at the linear/log boundary the two paths agree
     const nearBoundary = logRicianAnnulusProbability(3, 1, 33, 40);
     expect(Math.abs(nearBoundary - Math.log(riceByQuadrature(3, 1, 33, 40)))).toBeLessThan(1e-9 * Math.abs(nearBoundary));
+  });
+});
+
+describe('the small-receiver form bounds the exact offset loss', () => {
+  it('C(r)/C(0) ≥ exp(−2r²/W²) for any annulus (derived from e^t ≥ 1 + t)', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.05, max: 5, noNaN: true }),
+        fc.double({ min: 0, max: 0.9, noNaN: true }),
+        fc.double({ min: 0, max: 4, noNaN: true }),
+        (outer, obscuration, offset) => {
+          const w = 1;
+          const ratio = logOffsetAnnularCapture(w, outer, outer * obscuration, offset) - logCentredAnnularCapture(w, outer, outer * obscuration);
+          return ratio >= -2 * offset * offset - 1e-9;
+        },
+      ),
+    );
   });
 });
