@@ -162,9 +162,11 @@ describe('link budget properties', () => {
           scintillation: { include: true, probability: 1e-3 },
         };
         const [near, far] = first < second ? [first, second] : [second, first];
-        // 1e-6 dB plus the rounding of margins of millions of dB (a pointing error of 0.1 rad: the
-        // exact capture of a beam thousands of radii off the aperture, in logarithms) in relative terms
+        // A beam pointed tens of beam radii off the receiver (margins below −1000 dB) is left
+        // out: there the turbulence spread, growing faster than the range, really does bring the
+        // beam's edge closer in relative terms (Gaussian-beam model), so the margin may rise.
         const nearMarginDb = linkMarginAtRangeDb(turbulent, near);
+        fc.pre(nearMarginDb > -1000);
         expect(linkMarginAtRangeDb(turbulent, far)).toBeLessThanOrEqual(nearMarginDb + 1e-6 + 1e-10 * Math.abs(nearMarginDb));
       }),
       { numRuns: 300 },
