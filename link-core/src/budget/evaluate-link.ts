@@ -131,16 +131,24 @@ function hiddenPointingOutage(design: ResolvedDesign, chain: ChainResult): { los
   const beamRadiusM = chain.longTermBeamRadiusM;
   const apertureRadiusM = design.apertureDiameterM / 2;
   const obscurationRadiusM = apertureRadiusM * design.obscurationRatio;
+  // For any centrally symmetric aperture, writing the shifted Gaussian as g(x)·g(r)/g(0)·e^(4x·r/W²)
+  // and using 1 + t ≤ e^t and |x| ≤ a (derived): exp(−2r²/W²) ≤ C(r)/C(0) ≤ exp(−2(r² − 2ar)/W²).
+  // Both bounds grow with r (the lower one beyond a), so the loss exceeded with 1e-3 lies between
+  // the lower bound at the lower radius and the small-receiver loss at the upper radius, whether or
+  // not C falls from the centre: most designs are decided here without a series.
+  const upperRadiusM = biasM + RAYLEIGH_RADIUS_AT_HIDDEN_OUTAGE * jitterM;
+  const smallReceiverBoundDb = 2 * DB_PER_NEPER * (upperRadiusM / beamRadiusM) ** 2;
+  if (!(smallReceiverBoundDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB)) return undefined;
+  const lowerRadiusM = Math.max(RAYLEIGH_RADIUS_AT_HIDDEN_OUTAGE * jitterM, biasM + NORMAL_RADIUS_AT_HIDDEN_OUTAGE * jitterM);
+  if (lowerRadiusM >= apertureRadiusM) {
+    const lowerBoundDb = (2 * DB_PER_NEPER * lowerRadiusM * (lowerRadiusM - 2 * apertureRadiusM)) / (beamRadiusM * beamRadiusM);
+    if (lowerBoundDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB) return { lossDb: lowerBoundDb, exact: false };
+  }
   if (captureFallsFromCentre(beamRadiusM, apertureRadiusM, obscurationRadiusM)) {
-    const upperRadiusM = biasM + RAYLEIGH_RADIUS_AT_HIDDEN_OUTAGE * jitterM;
-    // For any centrally symmetric aperture C(r)/C(0) ≥ exp(−2r²/W²) (write the shifted Gaussian as
-    // g(x)·g(r)/g(0)·e^(4x·r/W²) and use e^t ≥ 1 + t; derived): the small-receiver loss bounds the
-    // exact one from above, so it rejects most designs without a series.
-    const smallReceiverBoundDb = 2 * DB_PER_NEPER * (upperRadiusM / beamRadiusM) ** 2;
-    if (!(smallReceiverBoundDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB)) return undefined;
+    // C falls with r: the exact captures at the two radii bound the quantile more tightly.
     const logCentre = -(chain.geometricLossDb + chain.turbulenceBeamSpreadLossDb) / DB_PER_NEPER;
     const lossAt = (offsetM: number) => -DB_PER_NEPER * (logOffsetAnnularCapture(beamRadiusM, apertureRadiusM, obscurationRadiusM, offsetM) - logCentre);
-    const lowerLossDb = lossAt(Math.max(RAYLEIGH_RADIUS_AT_HIDDEN_OUTAGE * jitterM, biasM + NORMAL_RADIUS_AT_HIDDEN_OUTAGE * jitterM));
+    const lowerLossDb = lossAt(lowerRadiusM);
     if (lowerLossDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB) return { lossDb: lowerLossDb, exact: false };
     if (!(lossAt(upperRadiusM) - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB)) return undefined;
   }

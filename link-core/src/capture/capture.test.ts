@@ -152,7 +152,7 @@ describe('logRicianAnnulusProbability (exact annular capture under an offset)', 
 });
 
 describe('the small-receiver form bounds the exact offset loss', () => {
-  it('C(r)/C(0) ≥ exp(−2r²/W²) for any annulus (derived from e^t ≥ 1 + t)', () => {
+  it('exp(−2r²/W²) ≤ C(r)/C(0) ≤ exp(−2(r² − 2ar)/W²) for any annulus (derived)', () => {
     fc.assert(
       fc.property(
         fc.double({ min: 0.05, max: 5, noNaN: true }),
@@ -161,7 +161,8 @@ describe('the small-receiver form bounds the exact offset loss', () => {
         (outer, obscuration, offset) => {
           const w = 1;
           const ratio = logOffsetAnnularCapture(w, outer, outer * obscuration, offset) - logCentredAnnularCapture(w, outer, outer * obscuration);
-          return ratio >= -2 * offset * offset - 1e-9;
+          // and from above by exp(−2(r² − 2ar)/W²), since |x| ≤ a on the aperture
+          return ratio >= -2 * offset * offset - 1e-9 && ratio <= -2 * offset * (offset - 2 * outer) + 1e-9;
         },
       ),
     );
