@@ -56,7 +56,10 @@ export { truncationGainEfficiency, transmittedFraction, optimumTruncation, unifo
 export type { OptimumTruncation, TransmitApertureForSpotInput, TransmitApertureForSpot } from './transmit/truncation.js';
 
 // Receive capture (METHODS.md §3)
-export { centredCaptureFraction, annularCaptureFraction, offsetCaptureFraction, captureFraction, geometricLossDb, smallApertureCaptureApproximation, faridHranilovicCapture, faridHranilovicCaptureFraction, topHatCaptureRatio, offsetForRelativeCapture, fieldOfViewCheck } from './capture/capture.js';
+export { centredCaptureFraction, annularCaptureFraction, offsetCaptureFraction, captureFraction, geometricLossDb, smallApertureCaptureApproximation, faridHranilovicCapture, faridHranilovicCaptureFraction, topHatCaptureRatio, offsetForRelativeCapture, fieldOfViewCheck, logRicianAnnulusProbability, logCentredAnnularCapture, logOffsetAnnularCapture, logMeanAnnularCapture } from './capture/capture.js';
+export { exactMeanPointingLossDb, exactOutagePointingLossDb, ricianOutageRadius, captureFallsFromCentre } from './pointing/exact-pointing.js';
+export { jointOutageProbability } from './budget/joint-outage.js';
+export type { JointOutage } from './budget/joint-outage.js';
 export type { CaptureFractionInput, FaridHranilovicCapture, TopHatCaptureInput, FieldOfViewInput, FieldOfViewCheck } from './capture/capture.js';
 
 // Pointing, jitter and building sway (METHODS.md §4)
@@ -78,11 +81,13 @@ export { wavenumberRadPerM, rytovVariance, rytovVarianceFast, fresnelZoneM, cohe
 export type { WaveModel, RytovVarianceInput, CoherenceInput, TurbulenceRegime } from './turbulence/rytov.js';
 export { normalisedApertureSquared, gammaGammaParameters, scintillationIndexAllRegimes, apertureAveragedScintillationIndex, weakApertureAveraging, weakApertureAveragingNumerical, apertureAveragedFadeMarginDb, apertureAveragedScintillationIndexFast } from './turbulence/scintillation.js';
 export type { GammaGammaParameters, GammaGammaParametersInput, WeakApertureAveraging } from './turbulence/scintillation.js';
-export { GAMMA_GAMMA_LOGNORMAL_SHAPE_LIMIT, gammaGammaCdf, gammaGammaPdf, gammaGammaCdfSeries, gammaGammaQuantile, fadeMarginGammaGammaDb, fadeMarginLognormalDb, fadeMarginDb } from './turbulence/fade-statistics.js';
+export { GAMMA_GAMMA_LOGNORMAL_SHAPE_LIMIT, GAMMA_GAMMA_LOGNORMAL_BLEND_START, gammaGammaCdf, gammaGammaPdf, gammaGammaCdfSeries, gammaGammaQuantile, fadeMarginGammaGammaDb, fadeMarginLognormalDb, fadeMarginDb } from './turbulence/fade-statistics.js';
 export type { FadeMarginInput } from './turbulence/fade-statistics.js';
 export { GAUSSIAN_BEAM_RYTOV_FORM_RATIO, gaussianBeamRytovRatioIntegral, gaussianBeamRytovRatio, gaussianBeamRytovRatioApproximate, gaussianBeamScintillationIndex } from './turbulence/gaussian-beam-scintillation.js';
 export { collimatedBeamWander, longTermBeamRadius } from './turbulence/beam-wander.js';
 export type { BeamWander, LongTermBeamRadius } from './turbulence/beam-wander.js';
+export { beamWaveAtReceiverFast, beamWaveScintillationFast, LONG_TERM_SPREAD_BRIDGE_EXPONENT } from './turbulence/beam-wave.js';
+export type { BeamWaveAtReceiver } from './turbulence/beam-wave.js';
 
 // Receiver (METHODS.md §7)
 export { PLANCK_CONSTANT_J_S, SPEED_OF_LIGHT_M_PER_S, ELEMENTARY_CHARGE_C, qFactorForBer, berForQFactor, qFactorDb, photonEnergyJ, photonsPerBit, idealResponsivityAPerW, receiverSensitivity, checkReceivedPower } from './receiver/sensitivity.js';
@@ -104,7 +109,7 @@ export { normaliseAzimuthDeg, geodesicInverse, geodeticToEcef, enuVector, format
 export type { GeodesicInverse, Ecef, Enu } from './geometry/geodesy.js';
 
 // Numerical building blocks
-export { noncentralChiSquare2Tails, marcumQ1, marcumQ1Complement } from './numeric/marcum-q.js';
+export { noncentralChiSquare2Tails, noncentralChiSquare2TailsFast, marcumQ1, marcumQ1Complement } from './numeric/marcum-q.js';
 export type { NoncentralChiSquareTails } from './numeric/marcum-q.js';
 export { findRootBrent } from './numeric/root-finding.js';
 export type { RootFindingOptions } from './numeric/root-finding.js';
@@ -114,6 +119,8 @@ export { besselI0Scaled } from './numeric/bessel.js';
 
 // Link budget and availability (METHODS.md §10–§11)
 export { evaluateLink, linkMarginAtRangeDb } from './budget/evaluate-link.js';
+export { compareEngineVersions, currentEngineFigures, readStoredDesign, GAUSSIAN_BEAM_DEFAULT_SINCE, REQUIRED_LINK_MARGIN_DB } from './budget/engine-version.js';
+export type { CurrentEngineFigures } from './budget/engine-version.js';
 export { maxRange, maxRangeM, MAX_RANGE_SEARCH_M } from './budget/max-range.js';
 export type { MaxRangeResult } from './budget/max-range.js';
 export { availabilityFromClimatology, availabilityFromRecords, clearAirMarginDb } from './budget/availability.js';

@@ -3,4 +3,4 @@
  * be traced to the code that computed it. Bump the minor part when a result changes numerically,
  * the patch part for fixes that leave every stored result unchanged.
  */
-export const LINK_CORE_VERSION = '0.1.0';
+export const LINK_CORE_VERSION = '0.2.0';

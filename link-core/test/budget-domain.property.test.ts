@@ -126,7 +126,7 @@ describe('evaluateLink over the whole schema domain', () => {
         }
         const notFinite = numbersOf(budget).filter(([, value]) => !Number.isFinite(value));
         expect(notFinite).toEqual([]);
-        expect(budget.terms).toHaveLength(9);
+        expect(budget.terms).toHaveLength(10);
       }),
       { numRuns: RUNS, seed: 20261203 },
     );

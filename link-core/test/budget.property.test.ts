@@ -89,7 +89,8 @@ describe('link budget properties', () => {
       ),
       { numRuns: 200 },
     );
-  });
+    // 16 000 full budgets (some on the exact-capture slow paths): more than the default 5 s on a loaded machine
+  }, 30_000);
 
   it('maxRangeM returns a range where the margin equals the requirement and is not met just beyond', () => {
     fc.assert(
@@ -116,7 +117,10 @@ describe('link budget properties', () => {
         const sum = budget.terms.reduce((total, term) => total + term.valueDb, 0);
         expect(Math.abs(sum - budget.linkMarginDb)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(budget.linkMarginDb)));
         expect(budget.geometricLossDb).toBeGreaterThanOrEqual(0);
-        expect(budget.pointingLossDb).toBeGreaterThanOrEqual(0);
+        // The pointing term is a gain only where an obscuration makes an offset capture more, and
+        // the mean capture can never exceed the whole beam: E[C] ≤ 1, so the gain ≤ −10·log10 C(0).
+        if (!(design.receiver.obscurationRatio! > 0)) expect(budget.pointingLossDb).toBeGreaterThanOrEqual(-1e-12);
+        expect(budget.pointingLossDb + budget.geometricLossDb).toBeGreaterThanOrEqual(-1e-9);
         expect(budget.atmosphericLossDb).toBeGreaterThan(0);
         expect(budget.scintillationFadeMarginDb).toBeGreaterThanOrEqual(0);
         // The API stores the budget as JSON and compares it with evaluateLink: the round trip must be exact.
@@ -158,7 +162,12 @@ describe('link budget properties', () => {
           scintillation: { include: true, probability: 1e-3 },
         };
         const [near, far] = first < second ? [first, second] : [second, first];
-        expect(linkMarginAtRangeDb(turbulent, far)).toBeLessThanOrEqual(linkMarginAtRangeDb(turbulent, near) + 1e-6);
+        // A beam pointed tens of beam radii off the receiver (margins below −1000 dB) is left
+        // out: there the turbulence spread, growing faster than the range, really does bring the
+        // beam's edge closer in relative terms (Gaussian-beam model), so the margin may rise.
+        const nearMarginDb = linkMarginAtRangeDb(turbulent, near);
+        fc.pre(nearMarginDb > -1000);
+        expect(linkMarginAtRangeDb(turbulent, far)).toBeLessThanOrEqual(nearMarginDb + 1e-6 + 1e-10 * Math.abs(nearMarginDb));
       }),
       { numRuns: 300 },
     );

@@ -34,7 +34,7 @@ describe('checkedBudget', () => {
     expect(body.message).toMatch(/could not be computed .*nothing was saved/);
     expect(body.issues).toEqual(
       expect.arrayContaining([
-        { path: 'budget.terms.7.valueDb', message: 'must be a finite number' },
+        { path: 'budget.terms.8.valueDb', message: 'must be a finite number' },
         { path: 'budget.scintillationFadeMarginDb', message: 'must be a finite number' },
         { path: 'budget.linkMarginDb', message: 'must be a finite number' },
       ]),

@@ -1,3 +1,4 @@
+import { currentEngineFigures } from '@beamwright/link-core';
 import type {
   Approval,
   LinkDetail,
@@ -53,6 +54,8 @@ export function toRevision(revision: LinkRevision, approval: Approval | null): R
     design: revision.design,
     budget: revision.budget,
     linkCoreVersion: revision.linkCoreVersion,
+    // An older engine's revision keeps its stored budget; the current engine's margin goes beside it.
+    currentEngine: currentEngineFigures(revision.design, revision.linkCoreVersion, revision.budget.linkMarginDb),
     note: revision.note,
     author: toUserRef(revision.author, revision.authorId),
     createdAt: revision.createdAt.toISOString(),
@@ -80,6 +83,7 @@ export function toLinkDetail(link: Link, latest: LinkRevision, approval: Approva
     design: revision.design,
     budget: revision.budget,
     linkCoreVersion: revision.linkCoreVersion,
+    currentEngine: revision.currentEngine,
     note: revision.note,
     author: revision.author,
     revisedAt: revision.createdAt,

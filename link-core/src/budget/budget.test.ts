@@ -1,5 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { requiredThresholdOverSigma } from '../pointing/pointing.js';
+import { ricianOutageRadius } from '../pointing/exact-pointing.js';
+import { normalQuantileOf } from '../turbulence/normal.js';
+import { logOffsetAnnularCapture } from '../capture/capture.js';
 import { LinkDesignSchema, type LinkDesignInput } from '../schemas/link-design.schema.js';
 import { LinkBudgetSchema } from '../schemas/link-budget.schema.js';
 import { availabilityFromClimatology, availabilityFromRecords, clearAirMarginDb } from './availability.js';
@@ -14,7 +17,7 @@ const lb01: LinkDesignInput = {
   transmitter: { wavelengthM: 1.55e-6, powerDbm: 20, waistRadiusM: 0.025, halfAngleDivergenceRad: 1e-3, opticsLossDb: 1 },
   receiver: { apertureDiameterM: 0.1, sensitivityDbm: -36, opticsLossDb: 1.5 },
   pointing: { jitterSigmaPerAxisRad: 50e-6, staticErrorRad: 100e-6 },
-  atmosphere: { model: 'kim', visibilityM: 5000, cn2: 5e-14 },
+  atmosphere: { model: 'kim', visibilityM: 5000, cn2: 5e-14, turbulenceModel: 'spherical-wave' },
   scintillation: { include: true, probability: 1e-3 },
 };
 
@@ -27,9 +30,9 @@ function variant(change: (design: LinkDesignInput) => void): LinkDesignInput {
 describe('evaluateLink', () => {
   const budget = evaluateLink(lb01);
 
-  it('gives the LB-01 margin (12.33 dB, METHODS.md §10.1)', () => {
-    expect(budget.linkMarginDb).toBeCloseTo(12.3323, 4);
-    expect(budget.receivedPowerDbm).toBeCloseTo(-13.8523, 4);
+  it('gives the LB-01 margin with the exact capture (12.33 dB, reference case LB-01-exact-pointing)', () => {
+    expect(budget.linkMarginDb).toBeCloseTo(12.33237831, 6);
+    expect(budget.receivedPowerDbm).toBeCloseTo(-13.8521807, 6);
   });
 
   it('refuses a design with a required field missing instead of answering NaN, naming the field', () => {
@@ -52,6 +55,7 @@ describe('evaluateLink', () => {
       'transmitPower',
       'transmitOptics',
       'geometricSpread',
+      'turbulenceBeamSpread',
       'atmosphericAttenuation',
       'pointingLoss',
       'receiveOptics',
@@ -61,7 +65,7 @@ describe('evaluateLink', () => {
     ]);
     const sum = budget.terms.reduce((total, term) => total + term.valueDb, 0);
     expect(sum).toBeCloseTo(budget.linkMarginDb, 12);
-    const untilReceiver = budget.terms.slice(0, 6).reduce((total, term) => total + term.valueDb, 0);
+    const untilReceiver = budget.terms.slice(0, 7).reduce((total, term) => total + term.valueDb, 0);
     expect(untilReceiver).toBeCloseTo(budget.receivedPowerDbm, 12);
     for (const term of budget.terms) {
       expect(term.method.length).toBeGreaterThan(10);
@@ -107,7 +111,7 @@ describe('evaluateLink', () => {
     const advection = fog('al-naboulsi-advection', 200);
     expect(advection.specificAttenuationDbPerKm).toBeCloseTo(85.43143556, 6);
     expect(advection.atmosphericLossDb).toBeCloseTo(85.43143556 / 2, 6);
-    expect(advection.terms[3]!.source).toMatch(/Al Naboulsi/);
+    expect(advection.terms.find((t) => t.key === 'atmosphericAttenuation')!.source).toMatch(/Al Naboulsi/);
     expect(advection.checks.map((check) => check.key)).not.toContain('fog-model-outside-validity');
     expect(fog('al-naboulsi-radiation', 200).specificAttenuationDbPerKm).toBeCloseTo(86.80866697, 6);
     expect(fog('al-naboulsi-advection', 5000).checks.map((check) => check.key)).toContain('fog-model-outside-validity');
@@ -147,37 +151,114 @@ describe('evaluateLink', () => {
     expect(wide.checks.map((check) => check.key)).not.toContain('field-of-view-below-turbulence-blur');
   });
 
-  it('budgets the loss at the outage radius for an outage-based design (METHODS.md §4.2)', () => {
+  it('budgets the exact capture at the outage radius for an outage-based design', () => {
     const outage = evaluateLink(variant((design) => (design.pointing.outageProbability = 1e-3)));
-    // bias/jitter = 100/50 µrad = 2 and p = 1e-3 give r_p = 5.241σ (METHODS.md §4.2, PT-04 example)
-    const radiusM = 5.241 * 50e-6 * 2000;
+    // bias/jitter = 100/50 µrad = 2 and p = 1e-3 give r_p = 5.241σ (Marcum Q1 root, as in the PT-04 reference case)
+    const radiusM = ricianOutageRadius(50e-6 * 2000, 100e-6 * 2000, 1e-3);
+    expect(radiusM / (50e-6 * 2000)).toBeCloseTo(5.241, 3);
+    const w = outage.beamRadiusAtReceiverM;
+    const exact = -(10 / Math.LN10) * (logOffsetAnnularCapture(w, 0.05, 0, radiusM) - Math.log(-Math.expm1(-2 * (0.05 / w) ** 2)));
     expect(outage.pointingLossModel).toBe('outage');
-    expect(outage.pointingLossDb).toBeCloseTo(8.686 * (radiusM / outage.beamRadiusAtReceiverM) ** 2, 3);
+    expect(outage.pointingLossDb).toBeCloseTo(exact, 12);
+    // a/W = 0.025 here: the small-receiver form 8.686·(r_p/W)² is within 1e-3 dB of the exact capture
+    expect(outage.pointingLossDb).toBeCloseTo(8.686 * (radiusM / w) ** 2, 2);
     expect(outage.pointingLossDb).toBeGreaterThan(budget.pointingLossDb);
-    expect(outage.terms[4]!.label).toMatch(/outage/);
+    expect(outage.terms.find((t) => t.key === 'pointingLoss')!.label).toMatch(/outage/);
     expect(budget.pointingLossModel).toBe('mean');
     const noJitter = evaluateLink(variant((design) => {
       design.pointing = { jitterSigmaPerAxisRad: 0, staticErrorRad: 100e-6, outageProbability: 1e-3 };
     }));
-    expect(noJitter.pointingLossDb).toBeCloseTo(8.6859 * ((100e-6 * 2000) / noJitter.beamRadiusAtReceiverM) ** 2, 4);
+    expect(noJitter.pointingLossDb).toBeCloseTo(8.6859 * ((100e-6 * 2000) / noJitter.beamRadiusAtReceiverM) ** 2, 3);
   });
 
-  it('uses the Gaussian limit of the Rician tail for a bias of many σ, in agreement with the exact root', () => {
+  it('finds the outage radius of a bias of many σ by the exact root, and by the large-bias expansion beyond 1000 σ', () => {
     const design = variant((d) => (d.pointing = { jitterSigmaPerAxisRad: 1e-6, staticErrorRad: 150e-6, outageProbability: 1e-3 }));
     const exactRadiusM = requiredThresholdOverSigma({ outageProbability: 1e-3, staticOffsetOverSigma: 150 }) * 1e-6 * 2000;
+    expect(Math.abs(ricianOutageRadius(1e-6 * 2000, 150e-6 * 2000, 1e-3) / exactRadiusM - 1)).toBeLessThan(1e-12);
     const budgetOutage = evaluateLink(design);
-    const exactLossDb = 2 * (10 / Math.LN10) * (exactRadiusM / budgetOutage.beamRadiusAtReceiverM) ** 2;
-    expect(Math.abs(budgetOutage.pointingLossDb / exactLossDb - 1)).toBeLessThan(1e-6);
+    const w = budgetOutage.beamRadiusAtReceiverM;
+    const exactLossDb = -(10 / Math.LN10) * (logOffsetAnnularCapture(w, 0.05, 0, exactRadiusM) - Math.log(-Math.expm1(-2 * (0.05 / w) ** 2)));
+    expect(Math.abs(budgetOutage.pointingLossDb / exactLossDb - 1)).toBeLessThan(1e-9);
+    // from 1000 σ the budget uses the large-bias expansion ν + σz + σ²/(2ν) − σ³z/(4ν²), z = −Φ⁻¹(p):
+    // against the exact root (quadrature Q1), through the budget's own outage term
+    for (const nu of [1000, 3000]) {
+      for (const p of [1e-9, 1e-3, 0.3]) {
+        const exactFar = ricianOutageRadius(1, nu, p);
+        const z = -normalQuantileOf(p);
+        expect(Math.abs((nu + z + 0.5 / nu - z / (4 * nu * nu)) / exactFar - 1)).toBeLessThan(1e-10);
+      }
+    }
+    const far = variant((d) => (d.pointing = { jitterSigmaPerAxisRad: 0.05e-6, staticErrorRad: 100e-6, outageProbability: 1e-3 }));
+    const farBudget = evaluateLink(far);
+    const farRadiusM = ricianOutageRadius(0.05e-6 * 2000, 100e-6 * 2000, 1e-3);
+    const farExactLossDb =
+      -(10 / Math.LN10) * (logOffsetAnnularCapture(farBudget.beamRadiusAtReceiverM, 0.05, 0, farRadiusM) - Math.log(-Math.expm1(-2 * (0.05 / farBudget.beamRadiusAtReceiverM) ** 2)));
+    expect(Math.abs(farBudget.pointingLossDb / farExactLossDb - 1)).toBeLessThan(1e-9);
   });
 
-  it('flags the small-receiver pointing model when the aperture is not small against the beam', () => {
-    expect(evaluateLink(lb01).checks.map((check) => check.key)).not.toContain('pointing-small-receiver-approximation');
-    const short = evaluateLink(variant((design) => {
-      design.rangeM = 60;
-      design.pointing.jitterSigmaPerAxisRad = 1e-3;
+  it('makes the pointing term a gain when an offset moves power onto an obscured aperture', () => {
+    // Short link, narrow beam, large obscuration: the beam centre sits behind the secondary mirror.
+    const gain = evaluateLink(variant((design) => {
+      design.rangeM = 200;
+      design.transmitter.halfAngleDivergenceRad = 100e-6;
+      design.receiver.apertureDiameterM = 0.2;
+      design.receiver.obscurationRatio = 0.4;
+      design.pointing = { jitterSigmaPerAxisRad: 50e-6, staticErrorRad: 150e-6 };
+      design.scintillation = { include: false };
     }));
-    expect(short.pointingLossDb).toBeGreaterThan(0.1);
-    expect(short.checks.map((check) => check.key)).toContain('pointing-small-receiver-approximation');
+    expect(gain.pointingLossDb).toBeLessThan(0);
+    expect(gain.terms.find((t) => t.key === 'pointingLoss')!.valueDb).toBeGreaterThan(0);
+    const sum = gain.terms.reduce((total, t) => total + t.valueDb, 0);
+    expect(sum).toBeCloseTo(gain.linkMarginDb, 9);
+  });
+
+  it('stays finite where the obscuration hides nearly all of the beam', () => {
+    const hidden = evaluateLink(variant((design) => {
+      design.rangeM = 50;
+      design.transmitter.halfAngleDivergenceRad = undefined;
+      design.receiver.apertureDiameterM = 0.5;
+      design.receiver.obscurationRatio = 0.9;
+      design.pointing = { jitterSigmaPerAxisRad: 1e-6, staticErrorRad: 2e-6 };
+    }));
+    expect(hidden.geometricLossDb).toBeGreaterThan(300);
+    expect(Number.isFinite(hidden.pointingLossDb)).toBe(true);
+    expect(Number.isFinite(hidden.linkMarginDb)).toBe(true);
+    const outage = evaluateLink(variant((design) => {
+      design.rangeM = 50;
+      design.transmitter.halfAngleDivergenceRad = undefined;
+      design.receiver.apertureDiameterM = 0.5;
+      design.receiver.obscurationRatio = 0.9;
+      design.pointing = { jitterSigmaPerAxisRad: 1e-6, staticErrorRad: 2e-6, outageProbability: 1e-3 };
+    }));
+    expect(Number.isFinite(outage.pointingLossDb)).toBe(true);
+  });
+
+  it("names the published steps of the visibility models in the ledger (Kim at 50 km, Kruse at 6 and 50 km)", () => {
+    const keys = (model: 'kim' | 'kruse', visibilityM: number) =>
+      evaluateLink(variant((design) => (design.atmosphere = { ...design.atmosphere, model, visibilityM }))).checks.map((check) => check.key);
+    expect(keys('kim', 48_000)).toContain('published-model-step');
+    expect(keys('kim', 6_000)).not.toContain('published-model-step'); // Kim's q is continuous at 6 km
+    expect(keys('kruse', 6_200)).toContain('published-model-step');
+    expect(keys('kim', 20_000)).not.toContain('published-model-step');
+    const attenuation = evaluateLink(lb01).terms.find((t) => t.key === 'atmosphericAttenuation')!;
+    expect(attenuation.method).toMatch(/50 km/);
+  });
+
+  it('warns when the mean pointing loss hides outages, and only in mean mode', () => {
+    // jitter 400 µrad on a 2 m beam at 2 km: σ = 0.8 m, a mean loss that looks mild
+    const jittery = variant((design) => (design.pointing = { jitterSigmaPerAxisRad: 400e-6, staticErrorRad: 100e-6 }));
+    const warned = evaluateLink(jittery);
+    const check = warned.checks.find((c) => c.key === 'pointing-mean-hides-outage');
+    expect(check?.severity).toBe('warning');
+    const atOutage = evaluateLink({ ...jittery, pointing: { ...jittery.pointing, outageProbability: 1e-3 } });
+    expect(atOutage.pointingLossDb - warned.pointingLossDb).toBeGreaterThan(1);
+    // the message states the loss at 1e-3, or a lower bound of it ("at least"), never more than it
+    const stated = Number(/is (?:at least )?(\d+\.\d+) dB/.exec(check!.message)![1]);
+    expect(stated).toBeLessThanOrEqual(atOutage.pointingLossDb + 0.005);
+    expect(stated - warned.pointingLossDb).toBeGreaterThan(1);
+    expect(check?.message).toMatch(/outage probability/);
+    expect(atOutage.checks.map((c) => c.key)).not.toContain('pointing-mean-hides-outage');
+    expect(budget.checks.map((c) => c.key)).not.toContain('pointing-mean-hides-outage');
   });
 
   it('gives the same margin through linkMarginAtRangeDb', () => {

@@ -6,8 +6,11 @@ import { coherenceRadiusM } from '../turbulence/rytov.js';
 import type { BudgetCheck, BudgetTerm, BudgetTermKey, LinkBudget } from '../schemas/link-budget.schema.js';
 import { formatZodIssues } from '../schemas/format-zod-issues.js';
 import { LinkDesignSchema, type LinkDesignInput } from '../schemas/link-design.schema.js';
-import { FOG_ATTENUATION_DESCRIPTION, POINTING_OUTAGE_DESCRIPTION, TERM_DESCRIPTIONS, type TermDescription } from './budget-terms.js';
-import { emptyResolvedDesign, evaluateChain, resolveDesign, resolveDesignInto, specificAttenuationDbPerKm, type ResolvedDesign } from './link-chain.js';
+import { BEAM_WAVE_FADE_DESCRIPTION, FOG_ATTENUATION_DESCRIPTION, POINTING_OUTAGE_DESCRIPTION, TERM_DESCRIPTIONS, type TermDescription } from './budget-terms.js';
+import { emptyResolvedDesign, evaluateChain, resolveDesign, resolveDesignInto, specificAttenuationDbPerKm, type ChainResult, type ResolvedDesign } from './link-chain.js';
+import { logOffsetAnnularCapture } from '../capture/capture.js';
+import { captureFallsFromCentre, exactOutagePointingLossDb } from '../pointing/exact-pointing.js';
+import { normalQuantileOf } from '../turbulence/normal.js';
 
 // The description is passed in (not looked up by key) so that each call site stays monomorphic.
 function term(key: BudgetTermKey, description: TermDescription, valueDb: number): BudgetTerm {
@@ -20,22 +23,14 @@ function diffractionHalfAngle(design: ResolvedDesign): number {
   return (design.m2 * design.wavelengthM) / (Math.PI * design.apertureBeamRadiusM);
 }
 
-/** Above this aperture-radius-to-beam-radius ratio the small-receiver pointing model is flagged. */
-const SMALL_RECEIVER_RATIO_LIMIT = 0.3;
-
-/** Pointing losses below this are too small for the model's approximation to matter [dB]. */
-const NOTICEABLE_POINTING_LOSS_DB = 0.1;
-
-function collectChecks(design: ResolvedDesign, receivedPowerDbm: number, diffractionRad: number, beamRadiusAtReceiverM: number, pointingLossDb: number): BudgetCheck[] {
+function collectChecks(design: ResolvedDesign, receivedPowerDbm: number, diffractionRad: number, chain: ChainResult): BudgetCheck[] {
   const checks: BudgetCheck[] = [];
-  const apertureOverBeam = design.apertureDiameterM / 2 / beamRadiusAtReceiverM;
-  if (apertureOverBeam > SMALL_RECEIVER_RATIO_LIMIT && pointingLossDb > NOTICEABLE_POINTING_LOSS_DB) {
-    // The pointing term multiplies the on-axis capture by exp(−2r²/W²), exact only for a ≪ W
-    // (Farid & Hranilovic 2007 quantify the finite-aperture case).
+  const hiddenOutage = hiddenPointingOutage(design, chain);
+  if (hiddenOutage !== undefined) {
     checks.push({
-      key: 'pointing-small-receiver-approximation',
-      severity: 'info',
-      message: `The receive aperture is not small against the beam (a/W = ${apertureOverBeam.toFixed(2)}): the pointing loss uses the small-receiver model and is approximate here.`,
+      key: 'pointing-mean-hides-outage',
+      severity: 'warning',
+      message: `The mean pointing loss (${chain.pointingLossDb.toFixed(2)} dB) hides outages: the pointing loss exceeded 0.1 % of the time is ${hiddenOutage.exact ? '' : 'at least '}${hiddenOutage.lossDb.toFixed(2)} dB. Budget the pointing at an outage probability (for example 1e-3) to hold margin against it.`,
     });
   }
   if (design.halfAngleDivergenceRad > 0 && design.halfAngleDivergenceRad <= diffractionRad) {
@@ -56,7 +51,15 @@ function collectChecks(design: ResolvedDesign, receivedPowerDbm: number, diffrac
     checks.push({
       key: 'visibility-converted-from-mor',
       severity: 'info',
-      message: 'Visibility entered as MOR (5 % contrast) was converted to the 2 % visibility (× 1.306) before the attenuation model was applied.',
+      message: 'Visibility entered as MOR (5 % contrast) was converted to the 2 % visibility (× ln 50/ln 20 = 1.30587) before the attenuation model was applied.',
+    });
+  }
+  const step = publishedVisibilityStepKm(design);
+  if (step !== undefined) {
+    checks.push({
+      key: 'published-model-step',
+      severity: 'info',
+      message: `The visibility (${design.visibility2PercentKm.toFixed(1)} km, 2 % contrast) is near ${step} km, where the ${design.kruse ? 'Kruse' : 'Kim'} model's wavelength exponent changes by a published step: the attenuation, and the margin, jump there by design of that model.`,
     });
   }
   if (design.kruse && design.visibility2PercentKm <= 6) {
@@ -90,6 +93,70 @@ function collectChecks(design: ResolvedDesign, receivedPowerDbm: number, diffrac
   }
   return checks;
 }
+
+/**
+ * The published step of the visibility exponent within 10 % of the design's visibility: Kim's q(V)
+ * at 50 km, Kruse's at 6 and 50 km (the other Kim breakpoints are continuous).
+ * @see Kim, McArthur & Korevaar, Proc. SPIE 4214 (2001); Kruse et al. (1962).
+ */
+function publishedVisibilityStepKm(design: ResolvedDesign): number | undefined {
+  if (design.fogNumeratorPerKm > 0) return undefined;
+  const steps = design.kruse ? KRUSE_STEPS_KM : KIM_STEPS_KM;
+  for (const step of steps) if (Math.abs(design.visibility2PercentKm / step - 1) <= 0.1) return step;
+  return undefined;
+}
+const KIM_STEPS_KM = [50];
+const KRUSE_STEPS_KM = [6, 50];
+
+/** Probability at which the mean-mode pointing term is compared with the loss it hides. */
+const HIDDEN_OUTAGE_PROBABILITY = 1e-3;
+/** The mean hides an outage when the loss at that probability exceeds it by more than this [dB]. */
+const HIDDEN_OUTAGE_EXCESS_DB = 1;
+const RAYLEIGH_RADIUS_AT_HIDDEN_OUTAGE = Math.sqrt(-2 * Math.log(HIDDEN_OUTAGE_PROBABILITY));
+
+/**
+ * In mean mode, when the pointing loss exceeded with probability 1e-3 is more than 1 dB above the
+ * mean loss: that loss, or a lower bound of it; undefined otherwise. Where C falls with the offset
+ * the radius r_p exceeded with 1e-3 lies in [max(3.717σ, ν + 3.090σ), ν + 3.717σ] (R is
+ * stochastically larger than without bias; P(R > ν + t) ≥ P(X₁ > t); |ν + X| ≤ ν + |X|), so the
+ * small-receiver bound at the upper end, then the captures at the ends, decide most designs without
+ * the quantile: the warning then states the loss at the lower end as "at least". Only between them
+ * (or where C rises) is the exact quantile solved.
+ */
+function hiddenPointingOutage(design: ResolvedDesign, chain: ChainResult): { lossDb: number; exact: boolean } | undefined {
+  if (!Number.isNaN(design.pointingOutageAngleRad)) return undefined;
+  const jitterM = design.jitterSigmaPerAxisRad * design.rangeM;
+  if (jitterM === 0) return undefined;
+  const biasM = design.staticErrorRad * design.rangeM;
+  const beamRadiusM = chain.longTermBeamRadiusM;
+  const apertureRadiusM = design.apertureDiameterM / 2;
+  const obscurationRadiusM = apertureRadiusM * design.obscurationRatio;
+  // For any centrally symmetric aperture, writing the shifted Gaussian as g(x)·g(r)/g(0)·e^(4x·r/W²)
+  // and using 1 + t ≤ e^t and |x| ≤ a (derived): exp(−2r²/W²) ≤ C(r)/C(0) ≤ exp(−2(r² − 2ar)/W²).
+  // Both bounds grow with r (the lower one beyond a), so the loss exceeded with 1e-3 lies between
+  // the lower bound at the lower radius and the small-receiver loss at the upper radius, whether or
+  // not C falls from the centre: most designs are decided here without a series.
+  const upperRadiusM = biasM + RAYLEIGH_RADIUS_AT_HIDDEN_OUTAGE * jitterM;
+  const smallReceiverBoundDb = 2 * DB_PER_NEPER * (upperRadiusM / beamRadiusM) ** 2;
+  if (!(smallReceiverBoundDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB)) return undefined;
+  const lowerRadiusM = Math.max(RAYLEIGH_RADIUS_AT_HIDDEN_OUTAGE * jitterM, biasM + NORMAL_RADIUS_AT_HIDDEN_OUTAGE * jitterM);
+  if (lowerRadiusM >= apertureRadiusM) {
+    const lowerBoundDb = (2 * DB_PER_NEPER * lowerRadiusM * (lowerRadiusM - 2 * apertureRadiusM)) / (beamRadiusM * beamRadiusM);
+    if (lowerBoundDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB) return { lossDb: lowerBoundDb, exact: false };
+  }
+  if (captureFallsFromCentre(beamRadiusM, apertureRadiusM, obscurationRadiusM)) {
+    // C falls with r: the exact captures at the two radii bound the quantile more tightly.
+    const logCentre = -(chain.geometricLossDb + chain.turbulenceBeamSpreadLossDb) / DB_PER_NEPER;
+    const lossAt = (offsetM: number) => -DB_PER_NEPER * (logOffsetAnnularCapture(beamRadiusM, apertureRadiusM, obscurationRadiusM, offsetM) - logCentre);
+    const lowerLossDb = lossAt(lowerRadiusM);
+    if (lowerLossDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB) return { lossDb: lowerLossDb, exact: false };
+    if (!(lossAt(upperRadiusM) - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB)) return undefined;
+  }
+  const lossDb = exactOutagePointingLossDb(beamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM, HIDDEN_OUTAGE_PROBABILITY);
+  return lossDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB ? { lossDb, exact: true } : undefined;
+}
+const NORMAL_RADIUS_AT_HIDDEN_OUTAGE = -normalQuantileOf(HIDDEN_OUTAGE_PROBABILITY);
+const DB_PER_NEPER = 10 / Math.LN10;
 
 // evaluateLink resolves into this one object: everything read from it is copied into the budget.
 const scratchDesign = emptyResolvedDesign();
@@ -150,7 +217,7 @@ export function evaluateLink(design: LinkDesignInput): LinkBudget {
   const resolved = resolveDesignInto(scratchDesign, design);
   if (!hasEveryRequiredNumber(resolved)) throw invalidDesignError(design);
   const attenuation = specificAttenuationDbPerKm(resolved, resolved.visibility2PercentKm);
-  const chain = evaluateChain(resolved, resolved.rangeM, attenuation, resolved.includeScintillation);
+  const chain = evaluateChain(resolved, resolved.rangeM, attenuation, resolved.includeScintillation, true);
   // NaN or ±Infinity in an input the typeof check let through (the schema rejects both) shows in
   // the margin or the beam: name the field rather than answer NaN. A design the schema accepts is
   // returned as computed (callers that store budgets check them against LinkBudgetSchema).
@@ -162,11 +229,12 @@ export function evaluateLink(design: LinkDesignInput): LinkBudget {
     term('transmitPower', TERM_DESCRIPTIONS.transmitPower, resolved.powerDbm),
     term('transmitOptics', TERM_DESCRIPTIONS.transmitOptics, -resolved.transmitOpticsLossDb),
     term('geometricSpread', TERM_DESCRIPTIONS.geometricSpread, -chain.geometricLossDb),
+    term('turbulenceBeamSpread', TERM_DESCRIPTIONS.turbulenceBeamSpread, -chain.turbulenceBeamSpreadLossDb),
     term('atmosphericAttenuation', resolved.fogNumeratorPerKm > 0 ? FOG_ATTENUATION_DESCRIPTION : TERM_DESCRIPTIONS.atmosphericAttenuation, -chain.atmosphericLossDb),
     term('pointingLoss', outagePointing ? POINTING_OUTAGE_DESCRIPTION : TERM_DESCRIPTIONS.pointingLoss, -chain.pointingLossDb),
     term('receiveOptics', TERM_DESCRIPTIONS.receiveOptics, -resolved.receiveOpticsLossDb),
     term('receiverSensitivity', TERM_DESCRIPTIONS.receiverSensitivity, -resolved.sensitivityDbm),
-    term('scintillationFade', TERM_DESCRIPTIONS.scintillationFade, -chain.scintillationFadeMarginDb),
+    term('scintillationFade', resolved.gaussianBeam ? BEAM_WAVE_FADE_DESCRIPTION : TERM_DESCRIPTIONS.scintillationFade, -chain.scintillationFadeMarginDb),
     term('systemAllowance', TERM_DESCRIPTIONS.systemAllowance, -resolved.systemMarginDb),
   ];
   return {
@@ -176,6 +244,9 @@ export function evaluateLink(design: LinkDesignInput): LinkBudget {
     diffractionHalfAngleRad: diffractionRad,
     rayleighRangeM: resolved.apertureBeamRadiusM / diffractionRad,
     beamRadiusAtReceiverM: chain.beamRadiusAtReceiverM,
+    turbulenceModel: resolved.gaussianBeam ? 'gaussian-beam' : 'spherical-wave',
+    longTermBeamRadiusM: chain.longTermBeamRadiusM,
+    beamWanderRmsM: chain.beamWanderRmsM,
     captureFraction: chain.captureFraction,
     geometricLossDb: chain.geometricLossDb,
     effectiveVisibilityM: resolved.visibility2PercentKm * 1000,
@@ -189,7 +260,7 @@ export function evaluateLink(design: LinkDesignInput): LinkBudget {
     scintillationFadeMarginDb: chain.scintillationFadeMarginDb,
     systemMarginDb: resolved.systemMarginDb,
     linkMarginDb: chain.linkMarginDb,
-    checks: collectChecks(resolved, chain.receivedPowerDbm, diffractionRad, chain.beamRadiusAtReceiverM, chain.pointingLossDb),
+    checks: collectChecks(resolved, chain.receivedPowerDbm, diffractionRad, chain),
   };
 }
 

@@ -7,11 +7,13 @@
 import { alNaboulsiFogExtinctionPerKm } from '../atmosphere/fog-and-precipitation.js';
 import { VISIBILITY_2_PERCENT_PER_MOR, visibility2PercentForAttenuationKm, visibilityExtinctionPerKmFast } from '../atmosphere/visibility-attenuation.js';
 import { launchBeamRadiusAtRangeM } from '../beam/launch.js';
-import { meanPointingLossDb, requiredThresholdOverSigma } from '../pointing/pointing.js';
+import { logMeanAnnularCapture } from '../capture/capture.js';
+import { exactOutagePointingLossAtRadiusDb, ricianOutageRadius } from '../pointing/exact-pointing.js';
 import { LINK_DESIGN_DEFAULTS, type AtmosphereModel, type LinkDesignInput } from '../schemas/link-design.schema.js';
 import { apertureAveragedFadeMarginDb, apertureAveragedScintillationIndexFast } from '../turbulence/scintillation.js';
 import { normalQuantileOf } from '../turbulence/normal.js';
 import { rytovVarianceFast } from '../turbulence/rytov.js';
+import { beamWaveAtReceiverFast, beamWaveScintillationFast, type BeamWaveAtReceiver } from '../turbulence/beam-wave.js';
 
 const DB_PER_NEPER_POWER = 10 / Math.LN10;
 
@@ -38,6 +40,8 @@ export interface ResolvedDesign {
    * since bias and jitter both scale with L); NaN for the mean-loss model
    */
   pointingOutageAngleRad: number;
+  /** the design's pointing outage probability; NaN for the mean-loss model */
+  pointingOutageProbability: number;
   /** visibility model of the design */
   atmosphereModel: AtmosphereModel;
   /** Kruse's exponent (Kim's otherwise) for the Kim/Kruse family */
@@ -51,6 +55,8 @@ export interface ResolvedDesign {
   visibility2PercentKm: number;
   morInput: boolean;
   cn2: number;
+  /** Gaussian-beam turbulence model (long-term spread, beam-wave scintillation); false: spherical wave */
+  gaussianBeam: boolean;
   includeScintillation: boolean;
   fadeProbability: number;
   systemMarginDb: number;
@@ -58,24 +64,24 @@ export interface ResolvedDesign {
 
 /**
  * Angular pointing error exceeded with probability p by a Rician error with bias θb and per-axis
- * jitter σθ: r_p/σ from Q1(θb/σθ, r_p/σ) = p, times σθ; the bias itself when there is no jitter.
- * @see Marcum J.I. (1960); METHODS.md §4.2 (pointing margin for a target outage).
+ * jitter σθ: the exact root of Q1(θb/σθ, r_p/σθ) = p (range-free: bias and jitter both scale with L).
+ * @see Marcum J.I. (1960); ricianOutageRadius.
  */
 function outageAngleRad(jitterSigmaPerAxisRad: number, staticErrorRad: number, outageProbability: number): number {
-  if (jitterSigmaPerAxisRad === 0) return staticErrorRad;
-  const offsetOverSigma = staticErrorRad / jitterSigmaPerAxisRad;
-  if (offsetOverSigma > LARGE_OFFSET_OVER_SIGMA) {
-    // A bias of many σ: R = |ν + x + i·y| ≈ ν + x + y²/(2ν), so r_p ≈ ν + σ·Φ⁻¹(1 − p) + σ²/(2ν)
-    // (derived; within 1e-6 of the exact Marcum-Q root at ν/σ = 100 and closer beyond, where the
-    // exact root is slow to evaluate).
-    // Written as ν − σ·Φ⁻¹(p) + σ²/(2ν) rather than σ·(ν/σ − …): ν/σ overflows for a vanishing jitter.
-    return staticErrorRad - jitterSigmaPerAxisRad * normalQuantileOf(outageProbability) + (jitterSigmaPerAxisRad / staticErrorRad) * (jitterSigmaPerAxisRad / 2);
+  if (jitterSigmaPerAxisRad > 0 && staticErrorRad / jitterSigmaPerAxisRad > LARGE_OFFSET_OVER_SIGMA) {
+    // A bias of very many σ: R = |ν + x + i·y| ≈ ν + x + y²/(2ν) − x·y²/(2ν²), whose p-quantile is
+    // r_p ≈ ν + σz + σ²/(2ν) − σ³z/(4ν²) with z = −Φ⁻¹(p) (derived: y² at its mean in the third
+    // term, its variance σ⁴/(2ν²) widening the normal quantile in the fourth; within 1e-10 of the
+    // exact root from 1000σ, budget.test.ts). Written without ν/σ, which overflows for a vanishing jitter.
+    const z = -normalQuantileOf(outageProbability);
+    const ratio = jitterSigmaPerAxisRad / staticErrorRad;
+    return staticErrorRad + jitterSigmaPerAxisRad * (z + ratio / 2 - (z * ratio * ratio) / 4);
   }
-  return jitterSigmaPerAxisRad * requiredThresholdOverSigma({ outageProbability, staticOffsetOverSigma: offsetOverSigma });
+  return ricianOutageRadius(jitterSigmaPerAxisRad, staticErrorRad, outageProbability);
 }
 
 /** Above this bias/jitter ratio the outage radius uses the Gaussian limit of the Rician tail. */
-const LARGE_OFFSET_OVER_SIGMA = 100;
+const LARGE_OFFSET_OVER_SIGMA = 1000;
 
 /**
  * Numerator of Al Naboulsi's fog extinction β = c/V (λ in µm, V in km): advection
@@ -112,12 +118,14 @@ export function emptyResolvedDesign(): ResolvedDesign {
     jitterSigmaPerAxisRad: 0,
     staticErrorRad: 0,
     pointingOutageAngleRad: Number.NaN,
+    pointingOutageProbability: Number.NaN,
     atmosphereModel: 'kim',
     kruse: false,
     fogNumeratorPerKm: 0,
     visibility2PercentKm: 0,
     morInput: false,
     cn2: 0,
+    gaussianBeam: true,
     includeScintillation: false,
     fadeProbability: 0,
     systemMarginDb: 0,
@@ -149,12 +157,14 @@ export function resolveDesignInto(target: ResolvedDesign, design: LinkDesignInpu
   target.staticErrorRad = pointing.staticErrorRad;
   target.pointingOutageAngleRad =
     pointing.outageProbability === undefined ? Number.NaN : outageAngleRad(pointing.jitterSigmaPerAxisRad, pointing.staticErrorRad, pointing.outageProbability);
+  target.pointingOutageProbability = pointing.outageProbability ?? Number.NaN;
   target.atmosphereModel = model;
   target.kruse = model === 'kruse';
   target.fogNumeratorPerKm = model === 'kim' || model === 'kruse' ? 0 : alNaboulsiNumerator(model, transmitter.wavelengthM);
   target.visibility2PercentKm = (morInput ? atmosphere.visibilityM * VISIBILITY_2_PERCENT_PER_MOR : atmosphere.visibilityM) / 1000;
   target.morInput = morInput;
   target.cn2 = atmosphere.cn2;
+  target.gaussianBeam = (atmosphere.turbulenceModel ?? LINK_DESIGN_DEFAULTS.turbulenceModel) === 'gaussian-beam';
   target.includeScintillation = design.scintillation?.include ?? LINK_DESIGN_DEFAULTS.scintillationInclude;
   target.fadeProbability = design.scintillation?.probability ?? LINK_DESIGN_DEFAULTS.scintillationProbability;
   target.systemMarginDb = design.systemMarginDb ?? LINK_DESIGN_DEFAULTS.systemMarginDb;
@@ -217,6 +227,12 @@ let lastCaptureFraction = 0;
 /** Numbers of one evaluation of the chain (all losses positive, in dB). */
 export interface ChainResult {
   beamRadiusAtReceiverM: number;
+  /** long-term beam radius W_LT [m]; W when spherical-wave or Cn² = 0 */
+  longTermBeamRadiusM: number;
+  /** radial rms beam wander [m]; 0 when spherical-wave or Cn² = 0 */
+  beamWanderRmsM: number;
+  /** 10·log10(C(0; W)/C(0; W_LT)) [dB]; 0 when spherical-wave or Cn² = 0, negative when a gain */
+  turbulenceBeamSpreadLossDb: number;
   captureFraction: number;
   geometricLossDb: number;
   atmosphericLossDb: number;
@@ -232,6 +248,9 @@ export interface ChainResult {
 // paths (maxRange, the samplers, evaluateLink) then allocate nothing per evaluation.
 const scratch: ChainResult = {
   beamRadiusAtReceiverM: 0,
+  longTermBeamRadiusM: 0,
+  beamWanderRmsM: 0,
+  turbulenceBeamSpreadLossDb: 0,
   captureFraction: 0,
   geometricLossDb: 0,
   atmosphericLossDb: 0,
@@ -250,36 +269,63 @@ const scratch: ChainResult = {
  * @param rangeM path length [m], > 0
  * @param attenuationDbPerKm specific atmospheric attenuation γ [dB/km], ≥ 0
  * @param includeScintillation whether to subtract the fade margin
+ * @param wanderWanted whether to compute the (informational) beam wander when the fade margin is off
  * @returns the chain's numbers, in a shared object that the next call overwrites (copy what you keep)
  * @see METHODS.md §10.1; the sources of each term are in budget-terms.ts.
  */
-export function evaluateChain(design: ResolvedDesign, rangeM: number, attenuationDbPerKm: number, includeScintillation: boolean): ChainResult {
+export function evaluateChain(design: ResolvedDesign, rangeM: number, attenuationDbPerKm: number, includeScintillation: boolean, wanderWanted = false): ChainResult {
   const beamRadiusM = launchBeamRadiusAtRangeM(design.wavelengthM, design.apertureBeamRadiusM, design.halfAngleDivergenceRad, design.m2, rangeM);
   const apertureRadiusM = design.apertureDiameterM / 2;
   const geometricLossDb = centredGeometricLossDb(beamRadiusM, apertureRadiusM, apertureRadiusM * design.obscurationRatio);
   const captureFraction = lastCaptureFraction;
   const atmosphericLossDb = (attenuationDbPerKm * rangeM) / 1000;
-  let pointingLossDb: number;
-  if (Number.isNaN(design.pointingOutageAngleRad)) {
-    pointingLossDb = meanPointingLossDb(beamRadiusM, design.jitterSigmaPerAxisRad * rangeM, design.staticErrorRad * rangeM);
-  } else {
-    // Loss of a small receiver at the outage radius: −10·log10(exp(−2r²/W²)) = 8.686·(r/W)² (METHODS.md §4.3).
-    const ratio = (design.pointingOutageAngleRad * rangeM) / beamRadiusM;
-    pointingLossDb = 2 * DB_PER_NEPER_POWER * ratio * ratio;
+  const obscurationRadiusM = apertureRadiusM * design.obscurationRatio;
+  const jitterM = design.jitterSigmaPerAxisRad * rangeM;
+  const biasM = design.staticErrorRad * rangeM;
+  // Gaussian-beam model: the long-term beam (wander inside it) replaces W for capture and pointing.
+  let captureBeamRadiusM = beamRadiusM;
+  let captureLossDb = geometricLossDb;
+  let turbulenceBeamSpreadLossDb = 0;
+  let beamWanderRmsM = 0;
+  let beam: BeamWaveAtReceiver | undefined;
+  if (design.gaussianBeam && design.cn2 > 0) {
+    beam = beamWaveAtReceiverFast(design.wavelengthM, design.apertureBeamRadiusM, design.halfAngleDivergenceRad, design.m2, rangeM, design.cn2, beamRadiusM, includeScintillation || wanderWanted);
+    captureBeamRadiusM = beam.longTermBeamRadiusM;
+    beamWanderRmsM = beam.beamWanderRmsM;
+    captureLossDb = centredGeometricLossDb(captureBeamRadiusM, apertureRadiusM, obscurationRadiusM);
+    turbulenceBeamSpreadLossDb = captureLossDb - geometricLossDb;
   }
+  // Exact capture of the annular aperture under the Rician error, relative to the centred capture
+  // (negative when an offset puts more power on an obscured aperture). Mean mode:
+  // −10·log10(E[C]/C(0)) with 10·log10 C(0) = −captureLossDb already at hand.
+  const pointingLossDb = Number.isNaN(design.pointingOutageAngleRad)
+    ? jitterM === 0 && biasM === 0
+      ? 0
+      : -DB_PER_NEPER_POWER * logMeanAnnularCapture(captureBeamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM) - captureLossDb + 0
+    : exactOutagePointingLossAtRadiusDb(captureBeamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM, design.pointingOutageProbability, design.pointingOutageAngleRad * rangeM);
   const receivedPowerDbm =
-    design.powerDbm - design.transmitOpticsLossDb - geometricLossDb - atmosphericLossDb - pointingLossDb - design.receiveOpticsLossDb;
+    design.powerDbm - design.transmitOpticsLossDb - geometricLossDb - turbulenceBeamSpreadLossDb - atmosphericLossDb - pointingLossDb - design.receiveOpticsLossDb;
   let rytovVarianceSpherical = 0;
   let scintillationIndex = 0;
   let scintillationFadeMarginDb = 0;
   if (includeScintillation && design.cn2 > 0) {
+    rytovVarianceSpherical = rytovVarianceFast(design.cn2, design.wavelengthM, rangeM, true);
+    if (beam !== undefined) {
+      // Beam wave, aperture averaged, off axis by the bias and the wander (turbulence/beam-wave.ts).
+      const wave = beamWaveScintillationFast(design.wavelengthM, rangeM, design.apertureDiameterM, design.obscurationRatio, beam, beamRadiusM, biasM, design.fadeProbability);
+      scintillationIndex = wave.scintillationIndex;
+      scintillationFadeMarginDb = wave.fadeMarginDb;
+    } else {
     // Spherical wave, aperture averaged, gamma-gamma at p (METHODS.md §6.2, §6.6, §6.9): divergent FSO
     // beams have Θ ≈ 0 at the receiver and behave as spherical waves.
-    rytovVarianceSpherical = rytovVarianceFast(design.cn2, design.wavelengthM, rangeM, true);
-    scintillationIndex = apertureAveragedScintillationIndexFast(design.wavelengthM, rangeM, design.cn2, design.apertureDiameterM);
-    scintillationFadeMarginDb = apertureAveragedFadeMarginDb(design.wavelengthM, rangeM, design.cn2, design.apertureDiameterM, design.fadeProbability);
+      scintillationIndex = apertureAveragedScintillationIndexFast(design.wavelengthM, rangeM, design.cn2, design.apertureDiameterM);
+      scintillationFadeMarginDb = apertureAveragedFadeMarginDb(design.wavelengthM, rangeM, design.cn2, design.apertureDiameterM, design.fadeProbability);
+    }
   }
   scratch.beamRadiusAtReceiverM = beamRadiusM;
+  scratch.longTermBeamRadiusM = captureBeamRadiusM;
+  scratch.beamWanderRmsM = beamWanderRmsM;
+  scratch.turbulenceBeamSpreadLossDb = turbulenceBeamSpreadLossDb;
   scratch.captureFraction = captureFraction;
   scratch.geometricLossDb = geometricLossDb;
   scratch.atmosphericLossDb = atmosphericLossDb;

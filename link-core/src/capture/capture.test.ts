@@ -5,6 +5,9 @@ import {
   captureFraction,
   faridHranilovicCaptureFraction,
   fieldOfViewCheck,
+  logCentredAnnularCapture,
+  logOffsetAnnularCapture,
+  logRicianAnnulusProbability,
   offsetForRelativeCapture,
   topHatCaptureRatio,
 } from './capture.js';
@@ -89,5 +92,79 @@ describe('top-hat ratio and field of view', () => {
     expect(ok.halfAngleFieldOfViewRad).toBeCloseTo(1e-3, 15);
     expect(ok.withinFieldOfView).toBe(true);
     expect(fieldOfViewCheck({ detectorRadiusM: 100e-6, focalLengthM: 0.1, tiltRad: 0.9e-3, focalSpotRadiusM: 20e-6 }).withinFieldOfView).toBe(false);
+  });
+});
+
+describe('logRicianAnnulusProbability (exact annular capture under an offset)', () => {
+  // Independent check: adaptive quadrature of the Rice density over the annulus (Rice 1945),
+  // against the positive-term Poisson series of the fast path.
+  const riceByQuadrature = (offset: number, sigma: number, inner: number, outer: number): number =>
+    integrate(
+      (t) => (t / (sigma * sigma)) * Math.exp(-((t - offset) ** 2) / (2 * sigma * sigma)) * besselI0Scaled((t * offset) / (sigma * sigma)),
+      inner,
+      outer,
+      { absoluteTolerance: 0, relativeTolerance: 1e-13 },
+    );
+
+  it('agrees with quadrature of the Rice density, with and without obscuration, apertures smaller and larger than the beam', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0, max: 6, noNaN: true }),
+        fc.double({ min: 0.05, max: 8, noNaN: true }),
+        fc.double({ min: 0, max: 0.9, noNaN: true }),
+        (offset, outer, obscuration) => {
+          const inner = outer * obscuration;
+          const expected = riceByQuadrature(offset, 1, inner, outer);
+          const actual = Math.exp(logRicianAnnulusProbability(offset, 1, inner, outer));
+          return Math.abs(actual - expected) <= 1e-11 * expected + 1e-300;
+        },
+      ),
+    );
+  });
+
+  it('keeps to the quadrature where offsets of tens of s take the rescaled series (μ + y > 650)', () => {
+    fc.assert(
+      fc.property(fc.double({ min: 36, max: 60, noNaN: true }), fc.double({ min: -3, max: 3, noNaN: true }), fc.double({ min: 0.5, max: 4, noNaN: true }), (offset, shift, width) => {
+        const inner = Math.max(0, offset + shift - width);
+        const outer = offset + shift + width;
+        const expected = Math.log(riceByQuadrature(offset, 1, inner, outer));
+        return Math.abs(logRicianAnnulusProbability(offset, 1, inner, outer) - expected) <= 1e-9 * Math.max(1, Math.abs(expected));
+      }),
+    );
+    // a small aperture far from the beam: ln P ≈ −(√μ − √y)² stays finite and close to the Gaussian tail
+    const far = logRicianAnnulusProbability(200, 1, 0, 1);
+    expect(far).toBeLessThan(-19000);
+    expect(far).toBeGreaterThan(-20200);
+  });
+
+  it('switches to the log domain where the probability leaves the doubles, continuously', () => {
+    // an obscuration of 40 s hides the beam: ln P ≈ −800, which the linear series cannot hold
+    const deep = logRicianAnnulusProbability(2, 1, 40, 50);
+    expect(Number.isFinite(deep)).toBe(true);
+    expect(deep).toBeLessThan(-600);
+    // the same by the closed form of the centred case, shifted slightly: a tiny offset changes little
+    const centred = -0.5 * 40 * 40 + Math.log(-Math.expm1(-0.5 * (50 * 50 - 40 * 40)));
+    expect(Math.abs(logRicianAnnulusProbability(1e-9, 1, 40, 50) - centred)).toBeLessThan(1e-9 * Math.abs(centred));
+    // at the linear/log boundary the two paths agree
+    const nearBoundary = logRicianAnnulusProbability(3, 1, 33, 40);
+    expect(Math.abs(nearBoundary - Math.log(riceByQuadrature(3, 1, 33, 40)))).toBeLessThan(1e-9 * Math.abs(nearBoundary));
+  });
+});
+
+describe('the small-receiver form bounds the exact offset loss', () => {
+  it('exp(−2r²/W²) ≤ C(r)/C(0) ≤ exp(−2(r² − 2ar)/W²) for any annulus (derived)', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.05, max: 5, noNaN: true }),
+        fc.double({ min: 0, max: 0.9, noNaN: true }),
+        fc.double({ min: 0, max: 4, noNaN: true }),
+        (outer, obscuration, offset) => {
+          const w = 1;
+          const ratio = logOffsetAnnularCapture(w, outer, outer * obscuration, offset) - logCentredAnnularCapture(w, outer, outer * obscuration);
+          // and from above by exp(−2(r² − 2ar)/W²), since |x| ≤ a on the aperture
+          return ratio >= -2 * offset * offset - 1e-9 && ratio <= -2 * offset * (offset - 2 * outer) + 1e-9;
+        },
+      ),
+    );
   });
 });

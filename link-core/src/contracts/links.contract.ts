@@ -109,6 +109,21 @@ export type LinkSummary = z.infer<typeof LinkSummarySchema>;
 export const LinkListResponseSchema = pageOf(LinkSummarySchema);
 export type LinkListResponse = z.infer<typeof LinkListResponseSchema>;
 
+/**
+ * The current engine's figures beside a revision computed by an older engine (null when the
+ * revision's own engine is the current one). The stored budget is never recomputed in place.
+ */
+export const CurrentEngineSchema = z.object({
+  linkCoreVersion: z.string(),
+  linkMarginDb: z.number(),
+  receivedPowerDbm: z.number(),
+  /** current minus stored margin [dB] */
+  marginChangeDb: z.number(),
+  /** the current engine's margin is below the required 3 dB */
+  belowRequiredMargin: z.boolean(),
+});
+export type CurrentEngine = z.infer<typeof CurrentEngineSchema>;
+
 /** One immutable revision: the design as stored (defaults applied) and the budget computed at save time. */
 export const RevisionSchema = z.object({
   linkId: z.uuid(),
@@ -117,6 +132,8 @@ export const RevisionSchema = z.object({
   budget: LinkBudgetSchema,
   /** link-core version that computed `budget` */
   linkCoreVersion: z.string(),
+  /** the current engine's margin when `linkCoreVersion` is older (optional: added in 0.2.0) */
+  currentEngine: CurrentEngineSchema.nullable().optional(),
   note: z.string(),
   author: UserRefSchema,
   createdAt: IsoDateTimeSchema,
@@ -130,6 +147,8 @@ export const LinkDetailSchema = LinkSummarySchema.extend({
   design: LinkDesignSchema,
   budget: LinkBudgetSchema,
   linkCoreVersion: z.string(),
+  /** the current engine's margin when the latest revision's engine is older */
+  currentEngine: CurrentEngineSchema.nullable().optional(),
   note: z.string(),
   author: UserRefSchema,
   /** when the latest revision was saved */

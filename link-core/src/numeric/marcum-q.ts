@@ -47,6 +47,188 @@ function poissonMixture(mu: number, y: number, upper: boolean): number {
   return sum;
 }
 
+/** Above this μ + y the fast series' starting weights e^(−μ), e^(−y) leave the normal doubles. */
+const FAST_SERIES_EXPONENT_LIMIT = 650;
+
+// 1/i for the series' first terms: a multiplication is cheaper than a division in the hot loop.
+const RECIPROCALS = Float64Array.from({ length: 256 }, (_, i) => (i === 0 ? 0 : 1 / i));
+
+// Scratch of the fast series (the hot path allocates nothing).
+const fastTails: NoncentralChiSquareTails = { cdf: 0, sf: 0 };
+
+/**
+ * Both tails of the noncentral chi-square (2 degrees of freedom) by sums of positive terms only,
+ * with no special function but one exp per argument, for μ + y ≤ 650 (μ = λ/2, y = x/2):
+ *   cdf = Σ_{i≥1} Pois(i; y)·P(N_μ ≤ i − 1),  sf = Σ_{j≥0} Pois(j; μ)·P(N_y ≤ j),
+ * the Poisson-mixture form with the incomplete gamma of integer order written as a Poisson CDF
+ * (P(j+1, y) = P(N_y > j)) and the double sum ordered so that both inner sums grow by additions.
+ * The smaller tail is summed (relative precision near machine epsilon, down to ~1e-280); the other
+ * is 1 minus it. Returns a shared object that the next call overwrites. NaN tails when outside the
+ * fast domain (the caller falls back).
+ * @see Johnson, Kotz & Balakrishnan (1995), ch. 29 (Poisson mixture); the reordering is derived.
+ */
+export function noncentralChiSquare2TailsFast(x: number, noncentrality: number): NoncentralChiSquareTails {
+  const mu = noncentrality / 2;
+  const y = x / 2;
+  if (y === 0) {
+    fastTails.cdf = 0;
+    fastTails.sf = 1;
+    return fastTails;
+  }
+  if (mu === 0) {
+    fastTails.sf = Math.exp(-y);
+    fastTails.cdf = -Math.expm1(-y);
+    return fastTails;
+  }
+  if (!(mu + y <= FAST_SERIES_EXPONENT_LIMIT)) {
+    fastTails.cdf = Number.NaN;
+    fastTails.sf = Number.NaN;
+    return fastTails;
+  }
+  // Both Poisson weights carry the common factor e^(−μ−y): sum without it (the sums stay below
+  // e^(μ+y) ≤ e^650, inside the doubles) and apply it once at the end.
+  const scale = Math.exp(-mu - y);
+  if (y < mu + 1) {
+    // cdf: Σ_{i≥1} Pois(i; y)·F_μ(i − 1). Term ratio ≤ ρ_i = y(1 + μ/i)/(i + 1), so once ρ < 1
+    // the rest is below term·ρ/(1 − ρ).
+    let poissonMu = 1;
+    let cdfMu = 1;
+    let poissonY = 1;
+    let sum = 0;
+    for (let i = 1; i < 100000; i++) {
+      const inverse = i < RECIPROCALS.length ? RECIPROCALS[i]! : 1 / i;
+      poissonY *= y * inverse;
+      const term = poissonY * cdfMu;
+      sum += term;
+      // ρ < 1 and term·ρ ≤ 1e-17·(1 − ρ)·sum, multiplied out by i(i + 1) (no division)
+      const growth = y * (i + mu);
+      const room = i * (i + 1) - growth;
+      if (room > 0 && term * growth <= 1e-17 * room * sum) break;
+      poissonMu *= mu * inverse;
+      cdfMu += poissonMu;
+    }
+    fastTails.cdf = sum * scale;
+    fastTails.sf = 1 - fastTails.cdf;
+    return fastTails;
+  }
+  // sf: Σ_{j≥0} Pois(j; μ)·F_y(j). Term ratio ≤ ρ_j = μ(1 + y/(j+1))/(j+1), so once ρ < 1 the rest
+  // is below term·ρ/(1 − ρ).
+  let poissonMu = 1;
+  let poissonY = 1;
+  let cdfY = 1;
+  let sum = 1;
+  for (let j = 1; j < 100000; j++) {
+    const inverse = j < RECIPROCALS.length ? RECIPROCALS[j]! : 1 / j;
+    poissonMu *= mu * inverse;
+    poissonY *= y * inverse;
+    cdfY += poissonY;
+    const term = poissonMu * cdfY;
+    sum += term;
+    // ρ < 1 and term·ρ ≤ 1e-17·(1 − ρ)·sum, multiplied out by (j + 1)² (no division)
+    const growth = mu * (j + 1 + y);
+    const room = (j + 1) * (j + 1) - growth;
+    if (room > 0 && term * growth <= 1e-17 * room * sum) break;
+  }
+  fastTails.sf = sum * scale;
+  fastTails.cdf = 1 - fastTails.sf;
+  return fastTails;
+}
+
+/** Log tails of {@link logNoncentralChiSquare2TailsScaled}. */
+export interface LogTails {
+  /** ln P(X ≤ x) */
+  logCdf: number;
+  /** ln P(X > x) */
+  logSf: number;
+}
+const logTails: LogTails = { logCdf: 0, logSf: 0 };
+/** Past this the plain (unscaled) factor of the scaled series would leave the doubles. */
+const SCALED_SERIES_PLAIN_LIMIT = 600;
+const SCALED_SERIES_TERM_LIMIT = 1e6;
+const RESCALE = 1e-250;
+const LOG_RESCALE = 250 * Math.LN10;
+
+/**
+ * Natural logs of both tails of the noncentral chi-square (2 degrees of freedom), by the same
+ * positive-term series as {@link noncentralChiSquare2TailsFast} summed with a running rescale, so
+ * that it holds where e^(−μ−y) leaves the doubles (offsets or radii of tens to thousands of σ):
+ * the smaller tail keeps full relative precision however small. Needs y ≤ 600 for the cdf branch
+ * (y < μ + 1) and μ ≤ 600 for the sf branch, and μ + y ≤ 1e6; NaN tails outside, or −∞ where a
+ * plain factor underflowed (the caller integrates instead).
+ * Returns a shared object that the next call overwrites.
+ * @see Johnson, Kotz & Balakrishnan (1995), ch. 29 (Poisson mixture); the reordering is derived.
+ */
+export function logNoncentralChiSquare2TailsScaled(x: number, noncentrality: number): LogTails {
+  const mu = noncentrality / 2;
+  const y = x / 2;
+  if (!(mu + y <= SCALED_SERIES_TERM_LIMIT)) {
+    // about √(μy) terms: past this the quadrature is the cheaper path
+    logTails.logCdf = Number.NaN;
+    logTails.logSf = Number.NaN;
+    return logTails;
+  }
+  if (y < mu + 1) {
+    if (!(y <= SCALED_SERIES_PLAIN_LIMIT) || y === 0) {
+      logTails.logCdf = y === 0 ? -Infinity : Number.NaN;
+      logTails.logSf = y === 0 ? 0 : Number.NaN;
+      return logTails;
+    }
+    let poissonMu = 1;
+    let cdfMu = 1;
+    let poissonY = 1;
+    let sum = 0;
+    let logScale = 0;
+    for (let i = 1; i < 1_000_000; i++) {
+      poissonY *= y / i;
+      const term = poissonY * cdfMu;
+      sum += term;
+      const growth = y * (i + mu);
+      const room = i * (i + 1) - growth;
+      if (room > 0 && term * growth <= 1e-17 * room * sum) break;
+      poissonMu *= mu / i;
+      cdfMu += poissonMu;
+      if (cdfMu > 1e250) {
+        cdfMu *= RESCALE;
+        poissonMu *= RESCALE;
+        sum *= RESCALE;
+        logScale += LOG_RESCALE;
+      }
+    }
+    logTails.logCdf = Math.log(sum) + logScale - mu - y;
+    logTails.logSf = Math.log1p(-Math.exp(logTails.logCdf));
+    return logTails;
+  }
+  if (!(mu <= SCALED_SERIES_PLAIN_LIMIT)) {
+    logTails.logCdf = Number.NaN;
+    logTails.logSf = Number.NaN;
+    return logTails;
+  }
+  let poissonMu = 1;
+  let poissonY = 1;
+  let cdfY = 1;
+  let sum = 1;
+  let logScale = 0;
+  for (let j = 1; j < 1_000_000; j++) {
+    poissonMu *= mu / j;
+    poissonY *= y / j;
+    cdfY += poissonY;
+    const term = poissonMu * cdfY;
+    sum += term;
+    const growth = mu * (j + 1 + y);
+    const room = (j + 1) * (j + 1) - growth;
+    if (room > 0 && term * growth <= 1e-17 * room * sum) break;
+    if (cdfY > 1e250) {
+      cdfY *= RESCALE;
+      poissonY *= RESCALE;
+      sum *= RESCALE;
+      logScale += LOG_RESCALE;
+    }
+  }
+  logTails.logSf = Math.log(sum) + logScale - mu - y;
+  logTails.logCdf = Math.log1p(-Math.exp(logTails.logSf));
+  return logTails;
+}
+
 // The Rice density is about 1σ wide: split long intervals into panels of at most 2σ so that no
 // narrow peak can fall between the nodes of a single coarse panel.
 function integrateInUnitPanels(density: (t: number) => number, lower: number, upper: number): number {
@@ -102,6 +284,10 @@ export function noncentralChiSquare2Tails(x: number, noncentrality: number): Non
     }
     const sf = Math.min(1, integrateInUnitPanels(density, b, Math.max(a, b) + 40));
     return { cdf: 1 - sf, sf };
+  }
+  if (mu + y <= FAST_SERIES_EXPONENT_LIMIT) {
+    const fast = noncentralChiSquare2TailsFast(x, noncentrality);
+    return { cdf: Math.min(1, fast.cdf), sf: Math.min(1, fast.sf) };
   }
   if (cdfIsSmaller) {
     const cdf = Math.min(1, poissonMixture(mu, y, false));

@@ -6,12 +6,14 @@
  */
 import { z } from 'zod';
 import { finiteNumber } from './fields.js';
+import { TURBULENCE_MODELS } from './link-design.schema.js';
 
 /** Stable keys of the budget terms, in the order they appear. */
 export const BUDGET_TERM_KEYS = [
   'transmitPower',
   'transmitOptics',
   'geometricSpread',
+  'turbulenceBeamSpread',
   'atmosphericAttenuation',
   'pointingLoss',
   'receiveOptics',
@@ -24,7 +26,8 @@ export type BudgetTermKey = (typeof BUDGET_TERM_KEYS)[number];
 /**
  * One step of the budget. `valueDb` is the signed contribution to the link margin: the transmit
  * power counts positive (in dBm), every loss and allowance negative (in dB), and the sensitivity
- * term is −S (in dB relative to 1 mW). Summing `valueDb` over the terms gives the link margin, and
+ * term is −S (in dB relative to 1 mW). A loss term can be a gain (positive `valueDb`) where the
+ * physics gives one (the pointing term on an obscured aperture); it is never clamped. Summing `valueDb` over the terms gives the link margin, and
  * summing the terms up to `receiveOptics` gives the received power in dBm — a waterfall chart is
  * the running sum.
  */
@@ -67,6 +70,15 @@ export const LinkBudgetSchema = z.object({
   rayleighRangeM: finiteNumber(),
   /** 1/e² beam radius at the receiver W(L) [m] */
   beamRadiusAtReceiverM: finiteNumber(),
+  /**
+   * turbulence model the budget used. Optional here (and in the two fields below) so that budgets
+   * stored by engines before 0.3 still parse: those were computed with the spherical wave.
+   */
+  turbulenceModel: z.enum(TURBULENCE_MODELS).optional(),
+  /** long-term (turbulence-spread) 1/e² beam radius W_LT [m]; equals beamRadiusAtReceiverM for the spherical wave or Cn² = 0 */
+  longTermBeamRadiusM: finiteNumber().optional(),
+  /** radial rms beam wander √⟨r_c²⟩ [m], contained in W_LT (for information); 0 for the spherical wave */
+  beamWanderRmsM: finiteNumber().optional(),
   /** fraction of the beam power inside the (annular) receive aperture, centred, in [0, 1] (0 only by underflow, when the obscuration blocks the beam) */
   captureFraction: finiteNumber(),
   /** geometric (capture) loss, positive [dB] */
@@ -77,7 +89,12 @@ export const LinkBudgetSchema = z.object({
   specificAttenuationDbPerKm: finiteNumber(),
   /** atmospheric loss γ·L, positive [dB] */
   atmosphericLossDb: finiteNumber(),
-  /** pointing loss, positive [dB]: the mean loss (Rician error, small-receiver closed form) or, for an outage-based design, the loss at the outage probability */
+  /**
+   * pointing loss [dB], relative to the centred capture, from the exact annular capture under the
+   * Rician error: the mean loss or, for an outage-based design, the loss exceeded with the outage
+   * probability. Signed: negative (a gain, shown as one) when an offset moves power from behind a
+   * central obscuration onto the annulus.
+   */
   pointingLossDb: finiteNumber(),
   pointingLossModel: z.enum(['mean', 'outage']),
   /** mean received power at the receiver's reference plane [dBm] */

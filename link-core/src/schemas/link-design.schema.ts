@@ -23,6 +23,11 @@ export const LINK_DESIGN_DEFAULTS = {
   scintillationInclude: true,
   /** fade probability 1e-3: METHODS.md §6.9 [common practice] */
   scintillationProbability: 1e-3,
+  /**
+   * turbulence of the launched Gaussian beam (long-term spread, beam-wave scintillation); a stored
+   * design without the field was computed with the spherical wave and is read as such (versioned read)
+   */
+  turbulenceModel: 'gaussian-beam',
   /** no ageing/dirt allowance unless the engineer sets one (1–3 dB is common practice, METHODS.md §10.1) */
   systemMarginDb: 0,
 } as const;
@@ -57,6 +62,10 @@ export const POINTING_OUTAGE_PROBABILITY_MESSAGE = probabilityMessage(PROBABILIT
  */
 export const ATMOSPHERE_MODELS = ['kim', 'kruse', 'al-naboulsi-advection', 'al-naboulsi-radiation'] as const;
 export type AtmosphereModel = (typeof ATMOSPHERE_MODELS)[number];
+
+/** Turbulence models of the budget (see AtmosphereSchema.turbulenceModel). */
+export const TURBULENCE_MODELS = ['gaussian-beam', 'spherical-wave'] as const;
+export type TurbulenceModel = (typeof TURBULENCE_MODELS)[number];
 
 /**
  * Which contrast threshold the visibility figure uses: 2 % (classical, what Kim and Kruse assume)
@@ -129,6 +138,13 @@ export const AtmosphereSchema = section({
     .default(LINK_DESIGN_DEFAULTS.visibilityDefinition),
   /** refractive-index structure parameter Cn² [m^(−2/3)], uniform along the path; 0 = no turbulence */
   cn2: boundedNumber({ atLeast: 0, atMost: 1e-10, unitNote: { lower: '0 m^(−2/3)', upper: '1e-10 m^(−2/3)' } }),
+  /**
+   * 'gaussian-beam' (the launched beam: long-term spread with wander, beam-wave scintillation) or
+   * 'spherical-wave' (the earlier model: no spread, spherical-wave scintillation). Absent means
+   * 'gaussian-beam' (LINK_DESIGN_DEFAULTS); no schema default, so a stored design keeps its absence
+   * and the api can read it as the model it was computed with.
+   */
+  turbulenceModel: z.enum(TURBULENCE_MODELS, { error: `must be one of ${TURBULENCE_MODELS.join(', ')}` }).optional(),
 });
 
 export const ScintillationSchema = section({

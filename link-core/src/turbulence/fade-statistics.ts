@@ -26,8 +26,16 @@ import { digamma, pentagamma, tetragamma, trigamma } from './polygamma.js';
  * Above this value of min(α, β) the gamma-gamma fade margin uses the log-normal law with the same
  * scintillation index (σ_I² < ~0.005; the difference is ≪ 0.01 dB), as the project's reference
  * computations do (METHODS.md §6.9).
+ * Below it a smooth blend towards the gamma-gamma law begins (GAMMA_GAMMA_LOGNORMAL_BLEND_START).
  */
 export const GAMMA_GAMMA_LOGNORMAL_SHAPE_LIMIT = 500;
+
+/**
+ * From this min(α, β) up to GAMMA_GAMMA_LOGNORMAL_SHAPE_LIMIT the gamma-gamma and log-normal
+ * thresholds are blended smoothly (the laws differ by 0.01–0.03 dB there: a hard switch would show
+ * as a step in a sweep and could trap a solver).
+ */
+export const GAMMA_GAMMA_LOGNORMAL_BLEND_START = 250;
 
 // Results of the last quadrature pass (module scratch: the hot path allocates nothing).
 let passCdf = 0;
@@ -225,7 +233,7 @@ export function lastGammaGammaQuantileStart(): number {
 /**
  * Allocation-free lower quantile of the gamma-gamma law: the normalised threshold x = I_T/⟨I⟩ with
  * F(x) = p. Halley's method on ln F(e^t) = ln p with a bracket safeguard; typically 2–3 quadrature
- * passes. For min(α, β) > 500 the log-normal quantile with the same σ_I² is returned.
+ * passes. For min(α, β) ≥ 500 the log-normal quantile with the same σ_I² is returned, blended smoothly from 250.
  *
  * @param alpha α > 0
  * @param beta β > 0
@@ -371,7 +379,8 @@ export function lastGammaGammaQuantileIterations(): number {
 }
 
 /**
- * Allocation-free gamma-gamma fade margin −10·log10(I_T/⟨I⟩) with P(I < I_T) = p.
+ * Allocation-free gamma-gamma fade margin −10·log10(I_T/⟨I⟩) with P(I < I_T) = p; for
+ * 250 < min(α, β) < 500 blended smoothly into the log-normal margin that applies above 500.
  *
  * @param alpha α > 0
  * @param beta β > 0
@@ -380,7 +389,18 @@ export function lastGammaGammaQuantileIterations(): number {
  * @see Al-Habash, Andrews & Phillips (2001); METHODS.md §6.9.
  */
 export function fadeMarginGammaGammaDb(alpha: number, beta: number, probability: number): number {
-  const margin = -10 * Math.log10(gammaGammaQuantile(alpha, beta, probability));
+  const smallerShape = Math.min(alpha, beta);
+  let margin: number;
+  if (smallerShape > GAMMA_GAMMA_LOGNORMAL_BLEND_START && smallerShape < GAMMA_GAMMA_LOGNORMAL_SHAPE_LIMIT) {
+    // Between the two shapes the margins of the two laws are blended by a quintic smoothstep in
+    // ln min(α, β): no step where the law changes (and a continuous slope and curvature).
+    const t = Math.log(smallerShape / GAMMA_GAMMA_LOGNORMAL_BLEND_START) / Math.log(GAMMA_GAMMA_LOGNORMAL_SHAPE_LIMIT / GAMMA_GAMMA_LOGNORMAL_BLEND_START);
+    const weight = t * t * t * (10 + t * (6 * t - 15));
+    const lognormal = fadeMarginLognormalDb(1 / alpha + 1 / beta + 1 / (alpha * beta), probability);
+    margin = (1 - weight) * -10 * Math.log10(gammaGammaQuantile(alpha, beta, probability)) + weight * lognormal;
+  } else {
+    margin = -10 * Math.log10(gammaGammaQuantile(alpha, beta, probability));
+  }
   return margin === 0 ? 0 : margin; // no −0 for a non-fluctuating beam
 }
 

@@ -69,6 +69,10 @@ function hypergeometricRytov(zRe: number, zIm: number): [number, number] | undef
   return [CONNECTION_FIRST * f1Re + CONNECTION_SECOND * (pRe * f2Re - pIm * f2Im), CONNECTION_FIRST * f1Im + CONNECTION_SECOND * (pRe * f2Im + pIm * f2Re)];
 }
 
+// i^(5/6) = cos(5π/12) + i sin(5π/12)
+const I_POWER_FIVE_SIXTHS_RE = Math.cos((5 * Math.PI) / 12);
+const I_POWER_FIVE_SIXTHS_IM = Math.sin((5 * Math.PI) / 12);
+
 /** (4π²·0.033/1.23): prefactor of the normalised Rytov integral. */
 const INTEGRAL_PREFACTOR = (4 * Math.PI * Math.PI * 0.033) / 1.23;
 
@@ -111,10 +115,7 @@ export function gaussianBeamRytovRatio(theta: number, lambda: number): number {
   requireNonNegative('lambda', lambda);
   const value = hypergeometricRytov(1 - theta, lambda);
   if (!value) return GAUSSIAN_BEAM_RYTOV_FORM_RATIO * gaussianBeamRytovRatioIntegral(theta, lambda);
-  // i^(5/6) = cos(5π/12) + i sin(5π/12)
-  const iRe = Math.cos((5 * Math.PI) / 12);
-  const iIm = Math.sin((5 * Math.PI) / 12);
-  const real = iRe * value[0] - iIm * value[1];
+  const real = I_POWER_FIVE_SIXTHS_RE * value[0] - I_POWER_FIVE_SIXTHS_IM * value[1];
   return 3.86 * (real - (11 / 16) * Math.pow(lambda, 5 / 6));
 }
 

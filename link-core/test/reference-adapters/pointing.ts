@@ -10,15 +10,44 @@ import {
   meanPointingLossDb,
   meanPointingRelativePower,
   pointingJitterBudget,
+  pointingLossAtOutageDb,
   pointingOutageProbability,
   requiredThresholdOverSigma,
 } from '../../src/pointing/pointing.js';
 import { buildingFundamentalFrequencyHz, buildingTiltEstimates } from '../../src/pointing/building-sway.js';
 import { offsetForRelativeCapture } from '../../src/capture/capture.js';
+import { exactMeanPointingLossDb, exactOutagePointingLossDb, ricianOutageRadius } from '../../src/pointing/exact-pointing.js';
 import { DB_PER_NATURAL_LOG_POWER } from '../../src/units/constants.js';
 import type { NotCovered, ReferenceAdapters } from './types.ts';
 
 export const adapters: ReferenceAdapters = {
+  mean_pointing_loss_exact: (inputs) => ({
+    mean_pointing_loss_dB: exactMeanPointingLossDb(
+      inputs.beam_radius_1e2_m,
+      inputs.aperture_radius_m,
+      inputs.obscuration_radius_m,
+      inputs.jitter_sigma_per_axis_m,
+      inputs.static_offset_m,
+    ),
+    small_receiver_form_dB: meanPointingLossDb(inputs.beam_radius_1e2_m, inputs.jitter_sigma_per_axis_m, inputs.static_offset_m),
+  }),
+  outage_pointing_loss_exact: (inputs) => ({
+    outage_radius_m: ricianOutageRadius(inputs.jitter_sigma_per_axis_m, inputs.static_offset_m, inputs.outage_probability),
+    outage_pointing_loss_dB: exactOutagePointingLossDb(
+      inputs.beam_radius_1e2_m,
+      inputs.aperture_radius_m,
+      inputs.obscuration_radius_m,
+      inputs.jitter_sigma_per_axis_m,
+      inputs.static_offset_m,
+      inputs.outage_probability,
+    ),
+    small_receiver_form_dB: pointingLossAtOutageDb({
+      beamRadiusM: inputs.beam_radius_1e2_m,
+      jitterSigmaPerAxisM: inputs.jitter_sigma_per_axis_m,
+      staticOffsetM: inputs.static_offset_m,
+      outageProbability: inputs.outage_probability,
+    }),
+  }),
   pointing_outage_rayleigh: (inputs) => ({
     outage_probability: pointingOutageProbability({ jitterSigmaPerAxisM: inputs.jitter_sigma_per_axis_m, thresholdRadiusM: inputs.threshold_radius_m }),
   }),

@@ -21,6 +21,8 @@ export interface DesignDraft {
   divergence: { extent: AngleExtent; definition: WidthDefinition };
   atmosphereModel: string;
   visibilityDefinition: string;
+  /** 'gaussian-beam' or 'spherical-wave'; '' when the design leaves it to the engine (the Gaussian beam) */
+  turbulenceModel: string;
   scintillationInclude: boolean;
 }
 
@@ -114,6 +116,7 @@ export function draftFromDesign(design: LinkDesignInput): DesignDraft {
     divergence: { extent: 'half', definition: '1/e2' },
     atmosphereModel: design.atmosphere?.model ?? 'kim',
     visibilityDefinition: design.atmosphere?.visibilityDefinition ?? 'contrast-2-percent',
+    turbulenceModel: design.atmosphere?.turbulenceModel ?? '',
     scintillationInclude: design.scintillation?.include ?? true,
   };
 }
@@ -178,6 +181,8 @@ export function evaluateDraft(draft: DesignDraft, base: LinkDesignInput | null):
   }
   writePath(candidate, 'atmosphere.model', draft.atmosphereModel);
   writePath(candidate, 'atmosphere.visibilityDefinition', draft.visibilityDefinition);
+  // an untouched choice stays absent, so reading a design back changes nothing
+  if (draft.turbulenceModel !== '') writePath(candidate, 'atmosphere.turbulenceModel', draft.turbulenceModel);
   writePath(candidate, 'scintillation.include', draft.scintillationInclude);
 
   const result = LinkDesignSchema.safeParse(candidate);
@@ -233,6 +238,7 @@ export function rebaseDraft(mine: DesignDraft, myBase: LinkDesignInput, latest: 
   const choices = [
     ['atmosphereModel', 'atmosphere.model'],
     ['visibilityDefinition', 'atmosphere.visibilityDefinition'],
+    ['turbulenceModel', 'atmosphere.turbulenceModel'],
     ['scintillationInclude', 'scintillation.include'],
   ] as const;
   for (const [key, path] of choices) {

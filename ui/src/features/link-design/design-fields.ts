@@ -186,6 +186,7 @@ export function fieldsOfSection(section: DesignSection): QuantityField[] {
 export const CHOICE_FIELD_LABELS: Record<string, string> = {
   'atmosphere.model': 'Visibility model',
   'atmosphere.visibilityDefinition': 'Visibility definition',
+  'atmosphere.turbulenceModel': 'Turbulence model',
   'scintillation.include': 'Scintillation fade margin',
 };
 
@@ -194,6 +195,12 @@ export const ATMOSPHERE_MODEL_LABELS: Record<string, string> = {
   kruse: 'Kruse (1962)',
   'al-naboulsi-advection': 'Al Naboulsi, advection fog',
   'al-naboulsi-radiation': 'Al Naboulsi, radiation fog',
+};
+
+/** The budget's turbulence models, with the one line the workspace shows beside the choice. */
+export const TURBULENCE_MODEL_LABELS: Record<string, string> = {
+  'gaussian-beam': 'Gaussian beam (launched beam: spread, wander, beam-wave fades)',
+  'spherical-wave': 'Spherical wave (earlier model: no spread term)',
 };
 
 export const VISIBILITY_DEFINITION_LABELS: Record<string, string> = {

@@ -295,6 +295,7 @@ export function DesignEditor({ link, historyAction }: { link: LinkDetail; histor
             budgetError={workspace.budgetError}
             chartDesign={workspace.chartDesign}
             stale={workspace.showingLastValid}
+            onUseOutagePointing={() => workspace.setText('pointing.outageProbability', '0.001')}
           />
         </div>
       </div>

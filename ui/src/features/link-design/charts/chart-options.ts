@@ -10,6 +10,7 @@ const SHORT_TERM_NAMES: Record<string, string> = {
   transmitPower: 'Tx power',
   transmitOptics: 'Tx optics',
   geometricSpread: 'Spread',
+  turbulenceBeamSpread: 'Beam spread',
   atmosphericAttenuation: 'Weather',
   pointingLoss: 'Pointing',
   receiveOptics: 'Rx optics',
@@ -29,7 +30,8 @@ interface WaterfallStep {
   name: string;
   low: number;
   high: number;
-  kind: 'level' | 'loss' | 'margin-good' | 'margin-poor';
+  /** 'gain' for a budget term the physics makes positive (an offset or spread onto an obscured aperture) */
+  kind: 'level' | 'loss' | 'gain' | 'margin-good' | 'margin-poor';
   detail: string;
 }
 
@@ -44,10 +46,10 @@ export function waterfallSteps(budget: LinkBudget): { steps: WaterfallStep[]; se
     const term = byKey.get(key as never);
     if (!term) return;
     const next = level + term.valueDb;
-    steps.push({ name: SHORT_TERM_NAMES[key] ?? term.label, low: Math.min(level, next), high: Math.max(level, next), kind: 'loss', detail: `${term.label}: ${round(term.valueDb)} dB` });
+    steps.push({ name: SHORT_TERM_NAMES[key] ?? term.label, low: Math.min(level, next), high: Math.max(level, next), kind: term.valueDb > 0 ? 'gain' : 'loss', detail: `${term.label}: ${term.valueDb > 0 ? '+' : ''}${round(term.valueDb)} dB${term.valueDb > 0 ? ' (a gain)' : ''}` });
     level = next;
   };
-  for (const key of ['transmitOptics', 'geometricSpread', 'atmosphericAttenuation', 'pointingLoss', 'receiveOptics']) loss(key);
+  for (const key of ['transmitOptics', 'geometricSpread', 'turbulenceBeamSpread', 'atmosphericAttenuation', 'pointingLoss', 'receiveOptics']) loss(key);
   steps.push({ name: 'Received', low: Number.NaN, high: level, kind: 'level', detail: `Mean received power: ${round(level)} dBm` });
   for (const key of ['scintillationFade', 'systemAllowance']) loss(key);
   const good = level >= sensitivityDbm;
@@ -69,7 +71,7 @@ export function waterfallOption(budget: LinkBudget, mode: ChartMode): ChartOptio
   const ceiling = Math.ceil((Math.max(...levels, sensitivityDbm) + 3) / 10) * 10;
   const step = ceiling - floor > 80 ? 20 : 10;
   const colourOf = (kind: WaterfallStep['kind']) =>
-    kind === 'level' ? '#0d7586' : kind === 'loss' ? beamPalette.loss : kind === 'margin-good' ? beamPalette.good : beamPalette.poor;
+    kind === 'level' ? '#0d7586' : kind === 'loss' ? beamPalette.loss : kind === 'gain' || kind === 'margin-good' ? beamPalette.good : beamPalette.poor;
   const text = CHART_TEXT[mode];
   return {
     grid: { left: 56, right: 84, top: 24, bottom: 56 },

@@ -17,6 +17,7 @@ import {
   ATMOSPHERE_MODEL_LABELS,
   QUANTITY_FIELDS,
   SECTION_TITLES,
+  TURBULENCE_MODEL_LABELS,
   VISIBILITY_DEFINITION_LABELS,
   WIDTH_DEFINITIONS,
   WIDTH_DEFINITION_LABELS,
@@ -299,6 +300,18 @@ function DesignFormView({ draft, errors, changedFieldIds, onTextChange, onUpdate
             </Select>
           </Field>
           {input('atmosphere.cn2')}
+          <Field
+            label="Turbulence model"
+            hint="The Gaussian beam follows the launched beam: turbulence widens it (a beam-spread row) and moves it; the spherical wave suits strongly divergent beams."
+          >
+            <Select value={draft.turbulenceModel || 'gaussian-beam'} onChange={(_, data) => onUpdate({ turbulenceModel: data.value })} name="atmosphere.turbulenceModel">
+              {Object.entries(TURBULENCE_MODEL_LABELS).map(([value, label]) => (
+                <option key={value} value={value}>
+                  {label}
+                </option>
+              ))}
+            </Select>
+          </Field>
           <Field label="Scintillation fade margin" hint="Gamma-gamma fade margin, spherical wave, aperture averaged.">
             <Switch
               checked={draft.scintillationInclude}

@@ -1,5 +1,5 @@
 import { useMemo } from 'react';
-import { MessageBar, MessageBarBody, Subtitle2, makeStyles, tokens } from '@fluentui/react-components';
+import { Button, MessageBar, MessageBarActions, MessageBarBody, Subtitle2, makeStyles, tokens } from '@fluentui/react-components';
 import { maxRange, type LinkBudget, type LinkDesignInput } from '@beamwright/link-core';
 import { THIN_MARGIN_DB } from '@/components/ui/margin-verdict';
 import { BudgetHeadline } from '@/features/link-design/components/budget-headline';
@@ -37,10 +37,12 @@ export interface DesignResultsProps {
   /** the figures belong to the last valid design, not to what is typed now */
   stale?: boolean;
   budgetError?: string | null;
+  /** switches the design to outage-based pointing (offered with the pointing-mean-hides-outage warning) */
+  onUseOutagePointing?: () => void;
 }
 
 /** Everything computed from a design: margin, eye safety, the budget ledger and the charts. */
-export function DesignResults({ design, budget, chartDesign, stale, budgetError }: DesignResultsProps) {
+export function DesignResults({ design, budget, chartDesign, stale, budgetError, onUseOutagePointing }: DesignResultsProps) {
   const styles = useStyles();
   const range = useMemo(() => {
     try {
@@ -71,8 +73,15 @@ export function DesignResults({ design, budget, chartDesign, stale, budgetError 
       {budget.checks.length > 0 && (
         <div style={{ display: 'grid', rowGap: 8 }}>
           {budget.checks.map((check) => (
-            <MessageBar key={check.key} intent={check.severity === 'warning' ? 'warning' : 'info'}>
+            <MessageBar key={check.key} intent={check.severity === 'warning' ? 'warning' : 'info'} data-check={check.key}>
               <MessageBarBody>{check.message}</MessageBarBody>
+              {check.key === 'pointing-mean-hides-outage' && onUseOutagePointing && (
+                <MessageBarActions>
+                  <Button size="small" onClick={onUseOutagePointing}>
+                    Use outage pointing (1e-3)
+                  </Button>
+                </MessageBarActions>
+              )}
             </MessageBar>
           ))}
         </div>

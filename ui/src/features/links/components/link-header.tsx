@@ -3,7 +3,7 @@ import { Link as RouterLink } from 'react-router-dom';
 import { Caption1, Title2, makeStyles, tokens } from '@fluentui/react-components';
 import { ChevronRightRegular } from '@fluentui/react-icons';
 import { paths } from '@/config/paths';
-import { formatDateTime } from '@/lib/format';
+import { formatDateTime, formatDb } from '@/lib/format';
 import { LinkStatusBadge } from '@/features/links/components/link-status-badge';
 import { LinkFlags } from '@/features/links/components/link-flags';
 import { LinkLifecycleActions } from '@/features/links/components/link-lifecycle-actions';
@@ -16,6 +16,8 @@ const useStyles = makeStyles({
   titleRow: { display: 'flex', alignItems: 'center', columnGap: tokens.spacingHorizontalM, flexWrap: 'wrap' },
   meta: { color: tokens.colorNeutralForeground3 },
   warning: { color: tokens.colorPaletteRedForeground1, margin: 0, maxWidth: '70ch' },
+  engine: { display: 'block', color: tokens.colorNeutralForeground2 },
+  engineBelow: { display: 'block', color: tokens.colorPaletteDarkOrangeForeground1 },
   actions: { display: 'flex', columnGap: tokens.spacingHorizontalS, rowGap: tokens.spacingVerticalS, flexWrap: 'wrap' },
 });
 
@@ -56,6 +58,17 @@ export function LinkHeader({ link, section, actions }: { link: LinkDetail; secti
           <Caption1 as="p" className={styles.warning} data-testid="path-changed-note">
             A site of this link moved or changed height on {formatDateTime(link.pathChangedAt)}, after its approval: the approval does not cover
             the path as it is now. Save a revision and have it reviewed again.
+          </Caption1>
+        )}
+        {link.currentEngine && (
+          // A revision computed by an older engine keeps its stored figures; the current engine's margin goes beside them.
+          <Caption1
+            className={link.currentEngine.belowRequiredMargin && (link.status === 'approved' || link.status === 'installed') ? styles.engineBelow : styles.engine}
+            data-testid="engine-comparison"
+          >
+            Computed by engine {link.linkCoreVersion}: margin {formatDb(link.linkMarginDb, { digits: 2 })}. Engine {link.currentEngine.linkCoreVersion} gives{' '}
+            {formatDb(link.currentEngine.linkMarginDb, { digits: 2 })} ({formatDb(link.currentEngine.marginChangeDb, { digits: 2, signed: true })}).
+            {link.currentEngine.belowRequiredMargin ? ' Below the required 3 dB with the current engine.' : ''}
           </Caption1>
         )}
       </div>
