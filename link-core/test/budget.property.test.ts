@@ -137,7 +137,12 @@ describe('link budget properties', () => {
         // out of the obscuration's shadow (see maxRange), so monotonicity is not a property there.
         const calm = { ...design, receiver: { ...design.receiver, obscurationRatio: 0 }, scintillation: { include: false, probability: 1e-3 } };
         const [near, far] = first < second ? [first, second] : [second, first];
-        expect(linkMarginAtRangeDb(calm, far)).toBeLessThanOrEqual(linkMarginAtRangeDb(calm, near) + 1e-9);
+        // As below: a beam pointed tens of beam radii off the receiver (margins below −1000 dB) is
+        // left out, since with Cn² > 0 the Gaussian-beam spread can bring its edge closer in
+        // relative terms; the tolerance allows the rounding of margins of thousands of dB.
+        const nearMarginDb = linkMarginAtRangeDb(calm, near);
+        fc.pre(nearMarginDb > -1000);
+        expect(linkMarginAtRangeDb(calm, far)).toBeLessThanOrEqual(nearMarginDb + 1e-9 + 1e-12 * Math.abs(nearMarginDb));
       }),
       { numRuns: 500 },
     );
