@@ -134,3 +134,6 @@ export type {
 } from './budget/availability.js';
 export { beamEnvelope, marginVsRange, marginVsVisibility } from './budget/samplers.js';
 export type { BeamEnvelope, BeamEnvelopeOptions, RangeSweep, RangeSweepOptions, VisibilitySweep, VisibilitySweepOptions } from './budget/samplers.js';
+
+// The worked example design LB-01 (METHODS.md §10.1), shared by the tests of every workspace
+export { workedExampleDesign } from './examples/worked-example.js';

@@ -9,17 +9,12 @@ import { availabilityFromClimatology, availabilityFromRecords, clearAirMarginDb 
 import { evaluateLink, linkMarginAtRangeDb } from './evaluate-link.js';
 import { maxRange, maxRangeM } from './max-range.js';
 import { beamEnvelope, marginVsRange, marginVsVisibility } from './samplers.js';
+import { workedExampleDesign } from '../examples/worked-example.js';
 
 // LB-01 of the reference set (METHODS.md §10.1); the full check against the published chain is in
 // test/reference.test.ts. Here: structure, defaults and consistency between the routines.
-const lb01: LinkDesignInput = {
-  rangeM: 2000,
-  transmitter: { wavelengthM: 1.55e-6, powerDbm: 20, waistRadiusM: 0.025, halfAngleDivergenceRad: 1e-3, opticsLossDb: 1 },
-  receiver: { apertureDiameterM: 0.1, sensitivityDbm: -36, opticsLossDb: 1.5 },
-  pointing: { jitterSigmaPerAxisRad: 50e-6, staticErrorRad: 100e-6 },
-  atmosphere: { model: 'kim', visibilityM: 5000, cn2: 5e-14, turbulenceModel: 'spherical-wave' },
-  scintillation: { include: true, probability: 1e-3 },
-};
+const worked = workedExampleDesign();
+const lb01: LinkDesignInput = { ...worked, atmosphere: { ...worked.atmosphere, turbulenceModel: 'spherical-wave' } };
 
 function variant(change: (design: LinkDesignInput) => void): LinkDesignInput {
   const copy = structuredClone(lb01);

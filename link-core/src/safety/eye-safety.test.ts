@@ -4,6 +4,7 @@ import { classOneAelW, ocularMpeDetails, ocularMpeWPerM2 } from './exposure-limi
 import { BINOCULAR_7X50_GAIN, nohdFarFieldM, nohdM } from './hazard-distance.js';
 import { eyeSafetyInputOf } from './eye-safety-input.js';
 import { evaluateLink } from '../budget/evaluate-link.js';
+import { workedExampleDesign } from '../examples/worked-example.js';
 import type { LinkDesignInput } from '../schemas/link-design.schema.js';
 
 describe('ocular MPE (IEC 60825-1 Table A.1 / ANSI Z136.1 Table 5a, from memory)', () => {
@@ -95,15 +96,9 @@ describe('indicative class and assessment', () => {
 });
 
 describe('eyeSafetyInputOf (the one rule that turns a design into an eye-safety input)', () => {
-  // the LB-01 worked budget's transmitter, with a 10 mm exit beam
-  const design: LinkDesignInput = {
-    rangeM: 2000,
-    transmitter: { wavelengthM: 1550e-9, powerDbm: 20, waistRadiusM: 0.01, halfAngleDivergenceRad: 1e-3, opticsLossDb: 1 },
-    receiver: { apertureDiameterM: 0.1, sensitivityDbm: -36, opticsLossDb: 1.5 },
-    pointing: { jitterSigmaPerAxisRad: 50e-6, staticErrorRad: 100e-6 },
-    atmosphere: { model: 'kim', visibilityM: 5000, cn2: 5e-14 },
-    scintillation: { include: true, probability: 1e-3 },
-  };
+  // the LB-01 worked example, with a 10 mm exit beam
+  const worked = workedExampleDesign();
+  const design: LinkDesignInput = { ...worked, transmitter: { ...worked.transmitter, waistRadiusM: 0.01 } };
 
   it('takes the power in watts (20 dBm = 0.1 W), the wavelength and the exit beam radius from the transmitter', () => {
     const input = eyeSafetyInputOf(design);

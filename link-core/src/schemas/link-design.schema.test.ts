@@ -1,16 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { formatZodIssues } from './format-zod-issues.js';
+import { workedExampleDesign } from '../examples/worked-example.js';
 import { FADE_PROBABILITY_MESSAGE, LINK_DESIGN_DEFAULTS, LinkDesignSchema, POINTING_OUTAGE_PROBABILITY_MESSAGE, PROBABILITY_BOUNDS, type LinkDesignInput } from './link-design.schema.js';
 
 // The worked example LB-01 of the reference set (METHODS.md §10.1): a 2 km 1550 nm link.
-const lb01: LinkDesignInput = {
-  rangeM: 2000,
-  transmitter: { wavelengthM: 1.55e-6, powerDbm: 20, waistRadiusM: 0.025, halfAngleDivergenceRad: 1e-3, opticsLossDb: 1 },
-  receiver: { apertureDiameterM: 0.1, sensitivityDbm: -36, opticsLossDb: 1.5 },
-  pointing: { jitterSigmaPerAxisRad: 50e-6, staticErrorRad: 100e-6 },
-  atmosphere: { model: 'kim', visibilityM: 5000, cn2: 5e-14 },
-  scintillation: { include: true, probability: 1e-3 },
-};
+const lb01: LinkDesignInput = workedExampleDesign();
 
 function withChange(path: string, value: unknown): unknown {
   const copy = structuredClone(lb01) as Record<string, unknown>;
