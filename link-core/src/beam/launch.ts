@@ -6,6 +6,7 @@
  * Sign convention for F0: Infinity = collimated (waist at the aperture), F0 > 0 converging,
  * F0 < 0 diverging. Radii are 1/e² intensity radii; angles 1/e² half-angles.
  */
+import { diffractionHalfAngleRad } from './gaussian-beam.js';
 
 /** Input of {@link andrewsPhillipsBeamParameters}. */
 export interface LaunchedBeamInput {
@@ -97,7 +98,7 @@ export interface DefocusedLaunch {
 export function defocusedLaunch(input: DefocusedLaunchInput): DefocusedLaunch {
   const { wavelengthM, apertureBeamRadiusM, halfAngleDivergenceRad } = input;
   const m2 = input.m2 ?? 1;
-  const diffraction = (m2 * wavelengthM) / (Math.PI * apertureBeamRadiusM);
+  const diffraction = diffractionHalfAngleRad(wavelengthM, apertureBeamRadiusM, m2);
   const excess = halfAngleDivergenceRad * halfAngleDivergenceRad - diffraction * diffraction;
   if (!(excess > 0)) {
     return { diffractionHalfAngleRad: diffraction, phaseFrontRadiusM: Infinity, collimated: true, farFieldHalfAngleRad: diffraction };
@@ -133,7 +134,7 @@ export function launchBeamRadiusAtRangeM(
   m2: number,
   rangeM: number,
 ): number {
-  const diffraction = (m2 * wavelengthM) / (Math.PI * apertureBeamRadiusM);
+  const diffraction = diffractionHalfAngleRad(wavelengthM, apertureBeamRadiusM, m2);
   const excess = halfAngleDivergenceRad * halfAngleDivergenceRad - diffraction * diffraction;
   const defocusGrowth = excess > 0 ? rangeM * Math.sqrt(excess) : 0;
   const geometric = apertureBeamRadiusM + defocusGrowth;

@@ -5,6 +5,7 @@
  */
 import { requireNonNegative, requirePositive } from '../atmosphere/input-guards.js';
 import { BINOCULAR_7X50_GAIN, nohdFarFieldM, nohdM } from './hazard-distance.js';
+import { diffractionHalfAngleRad } from '../beam/gaussian-beam.js';
 import {
   CLASS_3B_CW_LIMIT_W,
   classOneAel,
@@ -61,7 +62,7 @@ export function accessiblePowerW(input: AccessiblePowerInput): number {
   if (input.beamGrowth === 'linear') {
     radius = w0 + input.halfAngleDivergenceRad * z;
   } else {
-    const diffraction = input.wavelengthM / (Math.PI * w0);
+    const diffraction = diffractionHalfAngleRad(input.wavelengthM, w0);
     const excess = Math.sqrt(Math.max(0, input.halfAngleDivergenceRad ** 2 - diffraction ** 2));
     radius = Math.hypot(w0 + excess * z, diffraction * z);
   }

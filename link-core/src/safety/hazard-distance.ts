@@ -3,6 +3,7 @@
  * and the far-field hazard-evaluation form beside it, unaided or with magnifying optics.
  */
 import { requireNonNegative, requirePositive } from '../atmosphere/input-guards.js';
+import { diffractionHalfAngleRad } from '../beam/gaussian-beam.js';
 
 /** Optical gain of 7×50 binoculars for a beam larger than the objective: (50/7)² ≈ 51. */
 export const BINOCULAR_7X50_GAIN = (50 / 7) ** 2;
@@ -67,7 +68,7 @@ function validateNohd(input: NohdInput): number {
 export function nohdM(input: NohdInput): number {
   const gain = validateNohd(input);
   const w0 = input.waistRadiusM;
-  const diffraction = input.wavelengthM / (Math.PI * w0);
+  const diffraction = diffractionHalfAngleRad(input.wavelengthM, w0);
   const theta = Math.max(input.halfAngleDivergenceRad, diffraction);
   const limitRadiusSquared = (2 * input.powerW * gain) / (Math.PI * input.mpeWPerM2);
   const c = w0 * w0 - limitRadiusSquared;
