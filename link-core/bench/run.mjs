@@ -9,27 +9,16 @@
  * visibility records (synthetic, seeded), median of repeated runs after a warm-up.
  */
 import { loadavg } from 'node:os';
-import { availabilityFromRecords, evaluateLink } from '@beamwright/link-core';
+import { availabilityFromRecords, evaluateLink, seededUniform } from '@beamwright/link-core';
 
 const loadAverage = () => loadavg()[0].toFixed(1);
 
-/** Mulberry32: a small, fast, seeded PRNG (public domain, Tommy Ettinger). */
-function seededRandom(seed) {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let t = state;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 const WAVELENGTHS_M = [785e-9, 850e-9, 1310e-9, 1550e-9];
 
 /** Designs across the span of practice (METHODS.md §6.1, §7): ranges 0.2–5 km, fog to clear air, calm to strong turbulence. */
 function generateDesigns(count, seed, includeScintillation) {
-  const random = seededRandom(seed);
+  const random = seededUniform(seed);
   const uniform = (min, max) => min + (max - min) * random();
   const logUniform = (min, max) => Math.exp(uniform(Math.log(min), Math.log(max)));
   const designs = new Array(count);
@@ -128,7 +117,7 @@ function medianBudgetRate(count, firstSeed, includeScintillation) {
 // --- availability over ten years of hourly records ---------------------------------------------
 {
   const hours = 87_600;
-  const random = seededRandom(5);
+  const random = seededUniform(5);
   const makeRecords = () => {
     const visibilityM = new Float64Array(hours);
     const timestampsMs = new Float64Array(hours);

@@ -137,3 +137,6 @@ export type { BeamEnvelope, BeamEnvelopeOptions, RangeSweep, RangeSweepOptions, 
 
 // The worked example design LB-01 (METHODS.md §10.1), shared by the tests of every workspace
 export { workedExampleDesign } from './examples/worked-example.js';
+
+// A seeded uniform generator for Monte-Carlo checks and benchmarks (no unseeded randomness)
+export { seededUniform } from './numeric/seeded-random.js';

@@ -7,20 +7,9 @@
  */
 import { describe, expect, it } from 'vitest';
 import { evaluateLink, jointOutageProbability, logMeanAnnularCapture, logOffsetAnnularCapture, logCentredAnnularCapture, type LinkDesignInput } from '../src/index.js';
+import { seededUniform } from '../src/numeric/seeded-random.js';
 
 const DRAWS = 1_000_000;
-
-/** Mulberry32: small seeded PRNG (public domain, Tommy Ettinger). */
-function seededRandom(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let t = state;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return (((t ^ (t >>> 14)) >>> 0) + 0.5) / 4294967296;
-  };
-}
 
 function normalSampler(uniform: () => number): () => number {
   let spare = Number.NaN;
@@ -77,7 +66,7 @@ describe('Monte-Carlo check of the pointing and fade statistics (seeded, 10⁶ d
   const sigmaM = 60e-6 * 1200;
   const biasM = 40e-6 * 1200;
   const logCentre = logCentredAnnularCapture(beamRadiusM, a, b);
-  const uniform = seededRandom(20261203);
+  const uniform = seededUniform(20261203);
   const normal = normalSampler(uniform);
   const drawX = gammaSampler(joint.alpha, uniform, normal);
   const drawY = gammaSampler(joint.beta, uniform, normal);
