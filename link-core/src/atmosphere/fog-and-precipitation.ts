@@ -2,7 +2,7 @@
  * Fog attenuation with a fog type (Al Naboulsi), rain and snow attenuation, clear-air absorption.
  */
 import { DB_PER_NATURAL_LOG_POWER } from '../units/constants.js';
-import { requireNonNegative, requirePositive } from './input-guards.js';
+import { requireNonNegative, requirePositive } from '../numeric/input-guards.js';
 import { toContrast2PercentVisibilityM, type VisibilityDefinition } from './visibility-attenuation.js';
 
 /** Fog type of the Al Naboulsi model. */

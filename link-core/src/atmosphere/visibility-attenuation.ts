@@ -4,7 +4,7 @@
  * (the visibility at which a given specific attenuation is reached).
  */
 import { DB_PER_NATURAL_LOG_POWER } from '../units/constants.js';
-import { requirePositive } from './input-guards.js';
+import { requirePositive } from '../numeric/input-guards.js';
 
 /** Empirical wavelength-exponent models of visibility attenuation. */
 export type VisibilityModel = 'kim' | 'kruse';

@@ -1,7 +1,7 @@
 /**
  * International visibility code: the weather label of a visibility range, for UI captions.
  */
-import { requirePositive } from './input-guards.js';
+import { requirePositive } from '../numeric/input-guards.js';
 
 /** One row of the international visibility code. */
 export interface VisibilityCodeClass {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { requiredThresholdOverSigma } from '../pointing/pointing.js';
 import { ricianOutageRadius } from '../pointing/exact-pointing.js';
-import { normalQuantileOf } from '../turbulence/normal.js';
+import { normalQuantileOf } from '../numeric/normal.js';
 import { logOffsetAnnularCapture } from '../capture/capture.js';
 import { LinkDesignSchema, type LinkDesignInput } from '../schemas/link-design.schema.js';
 import { LinkBudgetSchema } from '../schemas/link-budget.schema.js';

@@ -10,7 +10,7 @@ import { BEAM_WAVE_FADE_DESCRIPTION, FOG_ATTENUATION_DESCRIPTION, POINTING_OUTAG
 import { emptyResolvedDesign, evaluateChain, resolveDesign, resolveDesignInto, specificAttenuationDbPerKm, type ChainResult, type ResolvedDesign } from './link-chain.js';
 import { logOffsetAnnularCapture } from '../capture/capture.js';
 import { captureFallsFromCentre, exactOutagePointingLossDb } from '../pointing/exact-pointing.js';
-import { normalQuantileOf } from '../turbulence/normal.js';
+import { normalQuantileOf } from '../numeric/normal.js';
 
 // The description is passed in (not looked up by key) so that each call site stays monomorphic.
 function term(key: BudgetTermKey, description: TermDescription, valueDb: number): BudgetTerm {

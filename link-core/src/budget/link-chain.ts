@@ -11,7 +11,7 @@ import { logMeanAnnularCapture } from '../capture/capture.js';
 import { exactOutagePointingLossAtRadiusDb, ricianOutageRadius } from '../pointing/exact-pointing.js';
 import { LINK_DESIGN_DEFAULTS, type AtmosphereModel, type LinkDesignInput } from '../schemas/link-design.schema.js';
 import { apertureAveragedFadeMarginDb, apertureAveragedScintillationIndexFast } from '../turbulence/scintillation.js';
-import { normalQuantileOf } from '../turbulence/normal.js';
+import { normalQuantileOf } from '../numeric/normal.js';
 import { rytovVarianceFast } from '../turbulence/rytov.js';
 import { beamWaveAtReceiverFast, beamWaveScintillationFast, type BeamWaveAtReceiver } from '../turbulence/beam-wave.js';
 

@@ -10,7 +10,7 @@ import { findRootBrent } from '../numeric/root-finding.js';
 import { DB_PER_NATURAL_LOG_POWER } from '../units/constants.js';
 import { rayleighThresholdOverSigma } from './pointing.js';
 import { besselI0Scaled } from '../numeric/bessel.js';
-import { normalQuantileOf } from '../turbulence/normal.js';
+import { normalQuantileOf } from '../numeric/normal.js';
 
 /**
  * Mean pointing loss, −10·log10(E[C(R)]/C(0)), with C the exact annular capture and R the Rician

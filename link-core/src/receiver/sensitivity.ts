@@ -4,7 +4,7 @@
  */
 import erfc from '@stdlib/math-base-special-erfc';
 import erfcinv from '@stdlib/math-base-special-erfcinv';
-import { requireInRange, requireOpenUnitInterval, requirePositive } from '../atmosphere/input-guards.js';
+import { requireInRange, requireOpenUnitInterval, requirePositive } from '../numeric/input-guards.js';
 
 /** Planck constant h [J·s] (SI 2019 exact). */
 export const PLANCK_CONSTANT_J_S = 6.62607015e-34;

@@ -3,7 +3,7 @@
  * apertures (Condition 1: optics; Condition 3: naked eye), and the one-call eye-safety assessment
  * for the planner and budget screens. Every result carries a caution: indicative, not a certification.
  */
-import { requireNonNegative, requirePositive } from '../atmosphere/input-guards.js';
+import { requireNonNegative, requirePositive } from '../numeric/input-guards.js';
 import { BINOCULAR_7X50_GAIN, nohdFarFieldM, nohdM } from './hazard-distance.js';
 import { diffractionHalfAngleRad } from '../beam/gaussian-beam.js';
 import {

@@ -7,7 +7,7 @@
  * Ed. 3, 2014, Annex A Table A.1 and the Class 1 AEL table) and ANSI Z136.1 Table 5a, cross-checked
  * against secondary reproductions [from memory]. Results are indicative, never a certification.
  */
-import { requirePositive } from '../atmosphere/input-guards.js';
+import { requirePositive } from '../numeric/input-guards.js';
 
 /** Editions of IEC 60825-1 whose limits differ in 1200–1400 nm. */
 export type LaserSafetyEdition = 'IEC 60825-1:2007' | 'IEC 60825-1:2014';

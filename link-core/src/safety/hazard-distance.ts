@@ -2,7 +2,7 @@
  * Nominal ocular hazard distance (NOHD) of a Gaussian FSO beam: the exact Gaussian form (default)
  * and the far-field hazard-evaluation form beside it, unaided or with magnifying optics.
  */
-import { requireNonNegative, requirePositive } from '../atmosphere/input-guards.js';
+import { requireNonNegative, requirePositive } from '../numeric/input-guards.js';
 import { diffractionHalfAngleRad } from '../beam/gaussian-beam.js';
 
 /** Optical gain of 7×50 binoculars for a beam larger than the objective: (50/7)² ≈ 51. */

@@ -1,7 +1,7 @@
 /**
  * Beam wander and long-term (time-averaged) spreading of a beam in turbulence.
  */
-import { requireNonNegative, requirePositive } from '../atmosphere/input-guards.js';
+import { requireNonNegative, requirePositive } from '../numeric/input-guards.js';
 
 /** Beam wander statistics of a collimated beam. */
 export interface BeamWander {

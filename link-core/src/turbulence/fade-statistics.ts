@@ -17,10 +17,10 @@ import erfc from '@stdlib/math-base-special-erfc';
 import gamma from '@stdlib/math-base-special-gamma';
 import gammaincinv from '@stdlib/math-base-special-gammaincinv';
 import gammaln from '@stdlib/math-base-special-gammaln';
-import { requireOpenUnitInterval, requirePositive } from '../atmosphere/input-guards.js';
+import { requireOpenUnitInterval, requirePositive } from '../numeric/input-guards.js';
 import { DB_PER_NATURAL_LOG_POWER } from '../units/constants.js';
-import { standardNormalQuantile } from './normal.js';
-import { digamma, pentagamma, tetragamma, trigamma } from './polygamma.js';
+import { standardNormalQuantile } from '../numeric/normal.js';
+import { digamma, pentagamma, tetragamma, trigamma } from '../numeric/polygamma.js';
 
 /**
  * Above this value of min(α, β) the gamma-gamma fade margin uses the log-normal law with the same

@@ -10,7 +10,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { fadeMarginDb, fadeMarginLognormalDb, gammaGammaCdf, gammaGammaQuantile, lastGammaGammaQuantileIterations } from './fade-statistics.js';
-import { normalQuantileOf } from './normal.js';
+import { normalQuantileOf } from '../numeric/normal.js';
 
 /** [α, β, p, I_T/⟨I⟩] from mpmath as described above. */
 const GAMMA_GAMMA_TAIL: readonly (readonly [number, number, number, number])[] = [

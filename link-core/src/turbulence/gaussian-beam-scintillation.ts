@@ -3,9 +3,9 @@
  * Phillips output-plane parameters Θ, Λ: the longitudinal Rytov variance σ_B² and the all-regime
  * on-axis scintillation index.
  */
-import { requireNonNegative } from '../atmosphere/input-guards.js';
+import { requireNonNegative } from '../numeric/input-guards.js';
 import { integrate } from '../numeric/quadrature.js';
-import { GAMMA_MINUS_FIVE_SIXTHS, kolmogorovKernelReal } from './complex-math.js';
+import { GAMMA_MINUS_FIVE_SIXTHS, kolmogorovKernelReal } from '../numeric/complex-math.js';
 
 // 2F1(a, b; c; z) with a = −5/6, b = 11/6, c = 17/6 and its 1 − z connection coefficients.
 const A = -5 / 6;

@@ -2,7 +2,7 @@
  * Rytov variances, coherence radius, Fried parameter and turbulence regimes for a horizontal path
  * with constant Cn² (Kolmogorov spectrum, zero inner scale, infinite outer scale).
  */
-import { requirePositive } from '../atmosphere/input-guards.js';
+import { requirePositive } from '../numeric/input-guards.js';
 
 /** Wave model of the turbulence formulas: plane wave or spherical wave (point source). */
 export type WaveModel = 'plane' | 'spherical';

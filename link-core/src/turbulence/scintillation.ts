@@ -2,9 +2,9 @@
  * Scintillation index in all regimes, aperture averaging, and the gamma-gamma parameters α, β
  * (point receiver and aperture-averaged), for plane and spherical waves with constant Cn².
  */
-import { requireNonNegative } from '../atmosphere/input-guards.js';
+import { requireNonNegative } from '../numeric/input-guards.js';
 import { integrate } from '../numeric/quadrature.js';
-import { kolmogorovKernelReal } from './complex-math.js';
+import { kolmogorovKernelReal } from '../numeric/complex-math.js';
 import type { WaveModel } from './rytov.js';
 import { rytovVarianceFast } from './rytov.js';
 import { fadeMarginGammaGammaDb } from './fade-statistics.js';

@@ -23,7 +23,7 @@ import {
   weakApertureAveraging,
   weakApertureAveragingNumerical,
 } from '../../src/turbulence/scintillation.ts';
-import { normalQuantileOf } from '../../src/turbulence/normal.ts';
+import { normalQuantileOf } from '../../src/numeric/normal.ts';
 import type { NotCovered, ReferenceAdapters, ReferenceInputs } from './types.ts';
 
 const CN2 = 'Cn2_m^-2/3';

@@ -6,7 +6,7 @@
  * inverse error function keeps every digit: Φ⁻¹(p) = −√2·erfcinv(2p) for p < 1/2.
  */
 import erfcinv from '@stdlib/math-base-special-erfcinv';
-import { requireOpenUnitInterval } from '../atmosphere/input-guards.js';
+import { requireOpenUnitInterval } from './input-guards.js';
 
 /**
  * Allocation-free Φ⁻¹(p) without argument checks (the hot paths check p once, up front).
