@@ -11,6 +11,7 @@ import { emptyResolvedDesign, evaluateChain, resolveDesign, resolveDesignInto, s
 import { logOffsetAnnularCapture } from '../capture/capture.js';
 import { captureFallsFromCentre, exactOutagePointingLossDb } from '../pointing/exact-pointing.js';
 import { normalQuantileOf } from '../numeric/normal.js';
+import { DB_PER_NATURAL_LOG_POWER as DB_PER_NEPER } from '../units/constants.js';
 
 // The description is passed in (not looked up by key) so that each call site stays monomorphic.
 function term(key: BudgetTermKey, description: TermDescription, valueDb: number): BudgetTerm {
@@ -156,7 +157,6 @@ function hiddenPointingOutage(design: ResolvedDesign, chain: ChainResult): { los
   return lossDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB ? { lossDb, exact: true } : undefined;
 }
 const NORMAL_RADIUS_AT_HIDDEN_OUTAGE = -normalQuantileOf(HIDDEN_OUTAGE_PROBABILITY);
-const DB_PER_NEPER = 10 / Math.LN10;
 
 // evaluateLink resolves into this one object: everything read from it is copied into the budget.
 const scratchDesign = emptyResolvedDesign();

@@ -16,6 +16,7 @@ import { gammaGammaParameters, normalisedApertureSquared } from '../turbulence/s
 import { evaluateLink } from './evaluate-link.js';
 import { resolveDesign } from './link-chain.js';
 import { launchBeamRadiusAtRangeM } from '../beam/launch.js';
+import { DB_PER_NATURAL_LOG_POWER as DB_PER_NEPER } from '../units/constants.js';
 
 /** Result of {@link jointOutageProbability}. */
 export interface JointOutage {
@@ -31,7 +32,6 @@ export interface JointOutage {
   beta: number;
 }
 
-const DB_PER_NEPER = 10 / Math.LN10;
 
 /**
  * Joint outage probability of a design at its own margin: with R the Rician radial pointing error

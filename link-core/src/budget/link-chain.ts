@@ -14,8 +14,8 @@ import { apertureAveragedFadeMarginDb, apertureAveragedScintillationIndexFast } 
 import { normalQuantileOf } from '../numeric/normal.js';
 import { rytovVarianceFast } from '../turbulence/rytov.js';
 import { beamWaveAtReceiverFast, beamWaveScintillationFast, type BeamWaveAtReceiver } from '../turbulence/beam-wave.js';
+import { DB_PER_NATURAL_LOG_POWER as DB_PER_NEPER_POWER } from '../units/constants.js';
 
-const DB_PER_NEPER_POWER = 10 / Math.LN10;
 
 /** A design reduced to the numbers the chain needs, defaults applied. */
 export interface ResolvedDesign {
