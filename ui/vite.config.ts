@@ -33,6 +33,18 @@ export default defineConfig({
     sourcemap: true,
     // The initial-JS budget (250 kB gzip) is checked by scripts/report-bundle.mjs; this only warns.
     chunkSizeWarningLimit: 900,
+    rolldownOptions: {
+      output: {
+        codeSplitting: {
+          groups: [
+            // zod and the module that sets it to jitless share one chunk, which every chunk that
+            // builds a schema imports: the setting is in place before any schema is built, even
+            // where the bundler moves shared schemas into a chunk the entry loads first.
+            { name: 'zod', test: /node_modules\/zod\/|src\/lib\/zod-config\.ts$/ },
+          ],
+        },
+      },
+    },
   },
   test: {
     environment: 'jsdom',

@@ -1,10 +1,6 @@
 // Settings that let the built app run under the server's Content-Security-Policy.
-import * as z from 'zod/mini';
+import '@/lib/zod-config';
 import { createDOMRenderer, type GriffelRenderer } from '@fluentui/react-components';
-
-// zod compiles object parsers with `new Function` when the page allows it; probing for that is a
-// CSP violation under `script-src 'self'`, so parse without it (the interpreter is as correct).
-z.config({ jitless: true });
 
 /**
  * The per-response nonce the server writes into index.html (Vite's `html.cspNonce` placeholder).
