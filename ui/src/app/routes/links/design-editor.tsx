@@ -25,10 +25,11 @@ import {
 import { ArrowUndoRegular, DismissRegular, SaveRegular } from '@fluentui/react-icons';
 import type { LinkDesignInput } from '@beamwright/link-core';
 import { isApiError } from '@/lib/api-client';
+import { linkKeys } from '@/lib/query-keys';
 import { LinkHeader } from '@/features/links/components/link-header';
 import { getLinkQueryOptions } from '@/features/links/api/get-link';
 import { readRevisionConflict, useSaveRevision } from '@/features/links/api/save-revision';
-import type { LinkDetail } from '@/features/links/api/types';
+import type { LinkDetail } from '@beamwright/link-core/contracts';
 import { useDesignWorkspace } from '@/features/link-design/hooks/use-design-workspace';
 import { DesignForm } from '@/features/link-design/components/design-form';
 import { DesignResults } from '@/features/link-design/components/design-results';
@@ -182,7 +183,7 @@ export function DesignEditor({ link, historyAction }: { link: LinkDetail; histor
     setBaseRevision(conflict.latestRevision);
     setRebaseNotice({ revision: conflict.latestRevision, reapplied: result.reapplied, overlapping: result.overlapping });
     setConflict(null);
-    void queryClient.invalidateQueries({ queryKey: ['links', 'detail', link.id] });
+    void queryClient.invalidateQueries({ queryKey: linkKeys.detail(link.id) });
   };
 
   const discard = () => {
