@@ -24,7 +24,7 @@ import {
 } from '@fluentui/react-components';
 import { ArrowUndoRegular, DismissRegular, SaveRegular } from '@fluentui/react-icons';
 import type { LinkDesignInput } from '@beamwright/link-core';
-import { isApiError } from '@/lib/api-client';
+import { apiFieldIssues, mapIssuesToFields } from '@/lib/form-errors';
 import { linkKeys } from '@/lib/query-keys';
 import { LinkHeader } from '@/features/links/components/link-header';
 import { getLinkQueryOptions } from '@/features/links/api/get-link';
@@ -159,13 +159,14 @@ export function DesignEditor({ link, historyAction }: { link: LinkDetail; histor
             });
             return;
           }
-          if (isApiError(error, 400) && error.issues.length > 0) {
-            const next: Record<string, string> = {};
-            for (const issue of error.issues) {
-              const path = issue.path.replace(/^design\./, '');
-              next[path] = `${designFieldLabel(path)} ${issue.message}`;
-            }
-            setServerErrors(next);
+          const issues = apiFieldIssues(error);
+          if (issues.length > 0) {
+            // design fields are named by their path inside the design
+            const { fieldErrors } = mapIssuesToFields(issues, (path) => {
+              const fieldPath = path.replace(/^design\./, '');
+              return { field: fieldPath, label: designFieldLabel(fieldPath) };
+            });
+            setServerErrors(fieldErrors as Record<string, string>);
             setSaveError('The server refused some values; they are marked next to their fields.');
             setSaveOpen(false);
             return;
