@@ -1,8 +1,11 @@
-import { useMemo } from 'react';
-import { Navigate, RouterProvider, createBrowserRouter, type RouteObject } from 'react-router-dom';
+import { useMemo, type ComponentType } from 'react';
+import { Navigate, RouterProvider, createBrowserRouter, type LoaderFunction, type RouteObject } from 'react-router-dom';
+import type { QueryClient } from '@tanstack/react-query';
 import { Spinner } from '@fluentui/react-components';
 import { paths } from '@/config/paths';
 import { RequireSession } from '@/lib/auth';
+import { queryClient as defaultQueryClient } from '@/lib/query-client';
+import { getSessionToken } from '@/lib/session-token';
 import { AppShell } from '@/components/layouts/app-shell';
 import { RouteError } from '@/components/errors/route-error';
 import { LinkLifecycleDialogHost } from '@/features/links/components/link-lifecycle-dialog';
@@ -13,8 +16,23 @@ const sessionFallback = (
   </div>
 );
 
-/** The route table, shared by the browser router and by tests (with a memory router). */
-export function createRoutes(): RouteObject[] {
+/**
+ * A lazy page whose module may export `createLoader(queryClient)`: its loader parses the route's
+ * params with the contract schemas and starts the page's queries with the page's own queryOptions.
+ * Loaders run before <RequireSession> renders: without a session they do nothing, and the guard
+ * sends the visitor to sign in before anything is asked of the api.
+ */
+function lazyPage(load: () => Promise<{ Component: ComponentType; createLoader?: (queryClient: QueryClient) => LoaderFunction }>, queryClient: QueryClient) {
+  return async () => {
+    const page = await load();
+    if (!page.createLoader) return { Component: page.Component };
+    const loader = page.createLoader(queryClient);
+    return { Component: page.Component, loader: ((args) => (getSessionToken() ? loader(args) : null)) satisfies LoaderFunction };
+  };
+}
+
+/** The route table, shared by the browser router and by tests (with a memory router and their own cache). */
+export function createRoutes(queryClient: QueryClient = defaultQueryClient): RouteObject[] {
   return [
     {
       path: paths.signIn.path,
@@ -35,10 +53,10 @@ export function createRoutes(): RouteObject[] {
       HydrateFallback: () => null,
       children: [
         { index: true, element: <Navigate to={paths.app.links.getHref()} replace /> },
-        { path: paths.app.links.path, lazy: () => import('@/app/routes/links/links-list'), errorElement: <RouteError /> },
-        { path: paths.app.newLink.path, lazy: () => import('@/app/routes/links/new-link'), errorElement: <RouteError /> },
-        { path: paths.app.link.path, lazy: () => import('@/app/routes/links/link-workspace'), errorElement: <RouteError /> },
-        { path: paths.app.linkHistory.path, lazy: () => import('@/app/routes/links/link-history'), errorElement: <RouteError /> },
+        { path: paths.app.links.path, lazy: lazyPage(() => import('@/app/routes/links/links-list'), queryClient), errorElement: <RouteError /> },
+        { path: paths.app.newLink.path, lazy: lazyPage(() => import('@/app/routes/links/new-link'), queryClient), errorElement: <RouteError /> },
+        { path: paths.app.link.path, lazy: lazyPage(() => import('@/app/routes/links/link-workspace'), queryClient), errorElement: <RouteError /> },
+        { path: paths.app.linkHistory.path, lazy: lazyPage(() => import('@/app/routes/links/link-history'), queryClient), errorElement: <RouteError /> },
         { path: '*', lazy: () => import('@/app/routes/not-found') },
       ],
     },

@@ -1,39 +1,33 @@
+import type { ErrorBody } from '@beamwright/link-core/contracts';
 import { env } from '@/config/env';
 import { clearSessionToken, getSessionToken } from '@/lib/session-token';
 
-/** A field-level problem reported by the api (400) in the link-core `formatZodIssues` shape. */
-export interface ApiFieldIssue {
-  path: string;
-  message: string;
-}
-
-/** The api's error body: `{ statusCode, error, message, issues? }`. */
-export interface ApiErrorBody {
-  statusCode: number;
-  error?: string;
-  message?: string | string[];
-  issues?: ApiFieldIssue[];
-  [extra: string]: unknown;
-}
-
+/**
+ * An answer other than 2xx. `body` is what the server sent, unchecked: read it with the contract
+ * schema of the status you expect (`ErrorBodySchema`, `RevisionConflictBodySchema`,
+ * `TooManyRequestsBodySchema` of `@beamwright/link-core/contracts`; `lib/form-errors.ts` for 400).
+ */
 export class ApiError extends Error {
   readonly status: number;
-  readonly body: ApiErrorBody | null;
+  readonly body: unknown;
   /** seconds to wait before trying again, from the Retry-After header (e.g. on a 429); null without one */
   readonly retryAfterS: number | null;
 
-  constructor(status: number, body: ApiErrorBody | null, fallbackMessage: string, retryAfterS: number | null = null) {
-    const message = Array.isArray(body?.message) ? body.message.join('; ') : body?.message;
-    super(message || fallbackMessage);
+  constructor(status: number, body: unknown, fallbackMessage: string, retryAfterS: number | null = null) {
+    super(messageOf(body) || fallbackMessage);
     this.name = 'ApiError';
     this.status = status;
     this.body = body;
     this.retryAfterS = retryAfterS;
   }
+}
 
-  get issues(): ApiFieldIssue[] {
-    return Array.isArray(this.body?.issues) ? this.body.issues : [];
-  }
+/** The sentence of an error body (`ErrorBody.message`); Nest's own errors may send a list. */
+function messageOf(body: unknown): string | undefined {
+  const message = body && typeof body === 'object' ? (body as Partial<Record<keyof ErrorBody, unknown>>).message : undefined;
+  if (typeof message === 'string') return message;
+  if (Array.isArray(message)) return message.filter((part) => typeof part === 'string').join('; ');
+  return undefined;
 }
 
 export function isApiError(error: unknown, status?: number): error is ApiError {
@@ -110,10 +104,9 @@ async function request<T>(method: string, path: string, body: unknown, options: 
     // An authenticated call refused with 401 means the session is over: dropping the token
     // makes the route guard send the user back to the sign-in page.
     if (response.status === 401 && authenticated && (options.dropSessionOn401 ?? true)) clearSessionToken();
-    const errorBody = payload && typeof payload === 'object' ? (payload as ApiErrorBody) : null;
     throw new ApiError(
       response.status,
-      errorBody,
+      payload && typeof payload === 'object' ? payload : null,
       `Request failed (${response.status} ${response.statusText || 'error'})`,
       parseRetryAfter(response.headers.get('Retry-After')),
     );

@@ -4,6 +4,7 @@ import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/r
 import { api, isApiError } from '@/lib/api-client';
 import { clearSessionToken, getSessionToken, setSessionToken, subscribeToSessionToken } from '@/lib/session-token';
 import { paths } from '@/config/paths';
+import { authKeys } from '@/lib/query-keys';
 
 import { isAllowed, type LoginRequest, type LoginResponse, type MeResponse, type Role } from '@beamwright/link-core/contracts';
 
@@ -32,7 +33,7 @@ export function useSessionToken(): string | null {
 export const getCurrentUser = ({ signal }: { signal?: AbortSignal } = {}) => api.get<CurrentUser>('/auth/me', { signal });
 
 export const getCurrentUserQueryOptions = () =>
-  queryOptions({ queryKey: ['auth', 'me'], queryFn: ({ signal }) => getCurrentUser({ signal }), staleTime: 5 * 60_000 });
+  queryOptions({ queryKey: authKeys.me(), queryFn: ({ signal }) => getCurrentUser({ signal }), staleTime: 5 * 60_000 });
 
 /** The signed-in user; only call below <RequireSession>, which waits for it. */
 export function useCurrentUser() {

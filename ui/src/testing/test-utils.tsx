@@ -55,9 +55,9 @@ export function mockApi(routes: MockRoute[]) {
 
 /** Renders the real route table at `path`, with a fresh query cache. */
 export function renderApp(path: string) {
-  const router = createMemoryRouter(createRoutes(), { initialEntries: [path] });
   const queryClient = createQueryClient();
   queryClient.setDefaultOptions({ queries: { ...queryClient.getDefaultOptions().queries, retry: false } });
+  const router = createMemoryRouter(createRoutes(queryClient), { initialEntries: [path] });
   const utils = render(
     <AppProvider queryClient={queryClient}>
       <RouterProvider router={router} />

@@ -51,11 +51,6 @@ export function toOneOverESquaredRadius(value: number, extent: WidthExtent | Ang
   return convertBeamWidth({ value, definition, extent: extentOf(extent) }, { definition: '1/e2', extent: 'radius' });
 }
 
-/** The schema's 1/e² radius or half-angle -> a width or angle in the chosen definition. */
-export function fromOneOverESquaredRadius(value: number, extent: WidthExtent | AngleExtent, definition: WidthDefinition): number {
-  return convertBeamWidth({ value, definition: '1/e2', extent: 'radius' }, { definition, extent: extentOf(extent) });
-}
-
 // Six significant figures: enough to give back what was typed, without binary noise.
 function writeNumber(value: number): string {
   return String(Number(value.toPrecision(6)));
@@ -248,11 +243,6 @@ export function rebaseDraft(mine: DesignDraft, myBase: LinkDesignInput, latest: 
     if (draftFromDesign(latest)[key] !== baseDraft[key]) overlapping.push(path);
   }
   return { draft: next, reapplied, overlapping };
-}
-
-/** Paths of the quantity fields whose text differs between two drafts. */
-export function changedFields(before: DesignDraft, after: DesignDraft): QuantityFieldId[] {
-  return QUANTITY_FIELD_IDS.filter((id) => before.text[id].trim() !== after.text[id].trim());
 }
 
 /** Fills the transmitter fields from a catalogue model, keeping the datasheet's own definitions. */

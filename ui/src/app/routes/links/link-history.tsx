@@ -1,5 +1,5 @@
 import { useEffect, useState } from 'react';
-import { Link as RouterLink, useParams } from 'react-router-dom';
+import { Link as RouterLink } from 'react-router-dom';
 import {
   Button,
   Caption1,
@@ -28,6 +28,7 @@ import { ReviewTrail } from '@/features/reviews/components/review-trail';
 import { ReviewActions } from '@/features/reviews/components/review-actions';
 import { DesignChangesTable } from '@/features/link-design/components/design-changes-table';
 import { describeChange } from '@/features/link-design/design-diff';
+import { linkPageLoader, useLinkIdParam } from '@/app/routes/links/link-route-params';
 
 const useStyles = makeStyles({
   layout: {
@@ -53,7 +54,7 @@ const useStyles = makeStyles({
 
 export function LinkHistoryRoute() {
   const styles = useStyles();
-  const { linkId = '' } = useParams();
+  const linkId = useLinkIdParam();
   const link = useLink(linkId);
   const revisions = useRevisions(linkId);
   const reviews = useReviews(linkId);
@@ -168,6 +169,7 @@ export function LinkHistoryRoute() {
   );
 }
 
+export const createLoader = linkPageLoader;
 export const Component = LinkHistoryRoute;
 
 interface RevisionSelectFieldProps {

@@ -40,6 +40,15 @@ async function findDialog(role: 'dialog' | 'alertdialog' = 'dialog'): Promise<HT
 const rangeInput = () => document.querySelector<HTMLInputElement>('input[name="rangeM"]')!;
 const powerInput = () => document.querySelector<HTMLInputElement>('input[name="transmitter.powerDbm"]')!;
 
+describe('link address', () => {
+  it('reads the id with the contract schema: an address that names no link shows nothing there and asks nothing about links', async () => {
+    const { calls } = mockApi(baseRoutes());
+    renderApp('/links/not-a-link-id');
+    expect(await screen.findByText('Page not found', {}, { timeout: 8000 })).toBeInTheDocument();
+    expect(calls.filter((call) => call.url.pathname.startsWith('/api/links'))).toHaveLength(0);
+  });
+});
+
 describe('link workspace (engineer)', () => {
   it('recomputes the margin in the browser as the range is typed, before anything is saved', async () => {
     const { calls } = mockApi(baseRoutes());

@@ -1,4 +1,4 @@
-import { Link as RouterLink, useParams } from 'react-router-dom';
+import { Link as RouterLink } from 'react-router-dom';
 import { Button, Skeleton, SkeletonItem } from '@fluentui/react-components';
 import { HistoryRegular } from '@fluentui/react-icons';
 import { paths } from '@/config/paths';
@@ -9,11 +9,12 @@ import { LinkHeader } from '@/features/links/components/link-header';
 import { DesignReadout } from '@/features/link-design/components/design-readout';
 import { DesignResults } from '@/features/link-design/components/design-results';
 import { DesignEditor } from '@/app/routes/links/design-editor';
-import type { LinkDetail } from '@/features/links/api/types';
+import type { LinkDetail } from '@beamwright/link-core/contracts';
 import { useWorkspaceStyles } from '@/app/routes/links/workspace-layout';
 import { SitePathSummary } from '@/features/sites/components/site-path-summary';
 import { ReviewActions } from '@/features/reviews/components/review-actions';
 import type { Role } from '@beamwright/link-core/contracts';
+import { linkPageLoader, useLinkIdParam } from '@/app/routes/links/link-route-params';
 
 function HistoryButton({ linkId }: { linkId: string }) {
   return (
@@ -51,7 +52,7 @@ function DesignViewer({ link, role, userId }: { link: LinkDetail; role: Role | u
 }
 
 export function LinkWorkspaceRoute() {
-  const { linkId = '' } = useParams();
+  const linkId = useLinkIdParam();
   const link = useLink(linkId);
   const me = useCurrentUser().data;
   const role = me?.role;
@@ -70,4 +71,5 @@ export function LinkWorkspaceRoute() {
   return <DesignEditor key={link.data.id} link={link.data} historyAction={<HistoryButton linkId={link.data.id} />} />;
 }
 
+export const createLoader = linkPageLoader;
 export const Component = LinkWorkspaceRoute;

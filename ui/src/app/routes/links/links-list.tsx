@@ -1,5 +1,6 @@
 import { useEffect, useState } from 'react';
-import { Link as RouterLink, useSearchParams } from 'react-router-dom';
+import { Link as RouterLink, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
+import type { QueryClient } from '@tanstack/react-query';
 import {
   Body1,
   Button,
@@ -22,13 +23,13 @@ import {
 import { AddRegular, ChevronLeftRegular, ChevronRightRegular } from '@fluentui/react-icons';
 import { paths } from '@/config/paths';
 import { policies, useCurrentUser } from '@/lib/auth';
-import { useLinks, type LinkSortField, type LinksQuery } from '@/features/links/api/get-links';
+import { LinkListQuerySchema, type LinkStatus } from '@beamwright/link-core/contracts';
+import type { LinkListParams } from '@/lib/query-keys';
+import { getLinksQueryOptions, useLinks } from '@/features/links/api/get-links';
 import { LinksTable } from '@/features/links/components/links-table';
-import type { LinkStatus } from '@/features/links/api/types';
 import { LINK_STATUS_LABELS, LINK_STATUSES } from '@beamwright/link-core/contracts';
 
 const PAGE_SIZE = 20;
-const SORT_FIELDS: readonly LinkSortField[] = ['name', 'status', 'linkMarginDb', 'rangeM', 'wavelengthM', 'updatedAt'];
 const STATUS_OPTIONS: { value: LinkStatus | ''; label: string }[] = [
   { value: '', label: 'Any status' },
   ...LINK_STATUSES.map((status) => ({ value: status, label: LINK_STATUS_LABELS[status] })),
@@ -44,17 +45,24 @@ const useStyles = makeStyles({
   empty: { padding: tokens.spacingHorizontalXXL, display: 'grid', rowGap: tokens.spacingVerticalS, justifyItems: 'start' },
 });
 
-function readQuery(searchParams: URLSearchParams): LinksQuery {
-  const sortParam = searchParams.get('sort') as LinkSortField | null;
-  const page = Number(searchParams.get('page') ?? '1');
-  const status = searchParams.get('status') as LinkStatus | null;
+/**
+ * The list's search parameters, read with the api's own query schema: each one on its own, so a
+ * parameter the schema refuses falls back to its default and leaves the others as they are.
+ */
+function readListQuery(searchParams: URLSearchParams): LinkListParams {
+  const read = <Key extends 'page' | 'sort' | 'order' | 'status' | 'q'>(key: Key): LinkListParams[Key] => {
+    const schema = LinkListQuerySchema.shape[key];
+    const parsed = schema.safeParse(searchParams.get(key) ?? undefined);
+    return (parsed.success ? parsed.data : schema.parse(undefined)) as LinkListParams[Key];
+  };
   return {
-    page: Number.isInteger(page) && page > 0 ? page : 1,
+    page: read('page'),
     pageSize: PAGE_SIZE,
-    sort: sortParam && SORT_FIELDS.includes(sortParam) ? sortParam : 'updatedAt',
-    order: searchParams.get('order') === 'asc' ? 'asc' : 'desc',
-    status: status && STATUS_OPTIONS.some((option) => option.value === status) ? status : undefined,
-    q: searchParams.get('q') ?? undefined,
+    sort: read('sort'),
+    order: read('order'),
+    status: read('status'),
+    q: read('q'),
+    // the switch shows archived links with the others; the list never asks for archived ones alone
     archived: searchParams.get('archived') === 'include' ? 'include' : undefined,
   };
 }
@@ -62,7 +70,7 @@ function readQuery(searchParams: URLSearchParams): LinksQuery {
 export function LinksListRoute() {
   const styles = useStyles();
   const [searchParams, setSearchParams] = useSearchParams();
-  const query = readQuery(searchParams);
+  const query = readListQuery(searchParams);
   const links = useLinks(query);
   const role = useCurrentUser().data?.role;
   const [searchText, setSearchText] = useState(query.q ?? '');
@@ -195,5 +203,13 @@ export function LinksListRoute() {
     </>
   );
 }
+
+/** Starts loading the page of links the address asks for, with the queryOptions useLinks reads. */
+export const createLoader =
+  (queryClient: QueryClient) =>
+  ({ request }: LoaderFunctionArgs) => {
+    void queryClient.prefetchQuery(getLinksQueryOptions(readListQuery(new URL(request.url).searchParams)));
+    return null;
+  };
 
 export const Component = LinksListRoute;

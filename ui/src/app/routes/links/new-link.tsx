@@ -1,5 +1,9 @@
-import { useState, type FormEvent } from 'react';
+import { useRef } from 'react';
 import { Navigate, useNavigate } from 'react-router-dom';
+import type { QueryClient } from '@tanstack/react-query';
+import { Controller, useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { z } from 'zod';
 import {
   Body1,
   Button,
@@ -15,13 +19,14 @@ import {
   makeStyles,
   tokens,
 } from '@fluentui/react-components';
+import { CreateLinkRequestSchema } from '@beamwright/link-core/contracts';
 import { parseQuantity } from '@beamwright/link-core/units';
 import { paths } from '@/config/paths';
 import { policies, useCurrentUser } from '@/lib/auth';
-import { isApiError } from '@/lib/api-client';
+import { labelledMessage, setApiFieldErrors, withFieldMessages, type IssueTarget } from '@/lib/form-errors';
 import { formatDistance } from '@/lib/format';
 import { useCreateLink } from '@/features/links/api/create-link';
-import { useSites } from '@/features/sites/api/get-sites';
+import { getSitesQueryOptions, useSites } from '@/features/sites/api/get-sites';
 import { useSitePathGeometry } from '@/features/sites/hooks/use-site-path-geometry';
 import { starterDesign } from '@/features/link-design/starter-design';
 
@@ -32,7 +37,36 @@ const useStyles = makeStyles({
   actions: { display: 'flex', columnGap: tokens.spacingHorizontalS, justifyContent: 'flex-end' },
 });
 
-type Errors = Partial<Record<'name' | 'rangeM' | 'siteAId' | 'siteBId' | 'form', string>>;
+type NewLinkField = 'name' | 'siteAId' | 'siteBId' | 'rangeText';
+const LABELS: Record<NewLinkField, string> = { name: 'Link name', siteAId: 'Site A', siteBId: 'Site B', rangeText: 'Path length' };
+
+/**
+ * The create request's own name rule; the path length is typed with its unit and read with
+ * parseQuantity, and may be left empty when both sites give it (`slantRangeM`).
+ */
+function newLinkFormSchema(slantRangeM: number | undefined) {
+  return z
+    .object({ name: CreateLinkRequestSchema.shape.name, siteAId: z.string(), siteBId: z.string(), rangeText: z.string() })
+    .superRefine((values, context) => {
+      if (values.siteAId && values.siteAId === values.siteBId) context.addIssue({ code: 'custom', path: ['siteBId'], message: 'must differ from site A' });
+      if (values.rangeText.trim() === '' && slantRangeM !== undefined) return;
+      const parsed = parseQuantity(values.rangeText, 'length', { defaultUnit: 'km', allowZero: false });
+      if (!parsed.ok) context.addIssue({ code: 'custom', path: ['rangeText'], message: parsed.reason === 'is empty' ? 'is required (or choose both sites)' : parsed.reason });
+    })
+    .transform((values) => {
+      const parsed = parseQuantity(values.rangeText, 'length', { defaultUnit: 'km', allowZero: false });
+      return { ...values, rangeM: parsed.ok ? parsed.valueSi : (slantRangeM ?? 0) };
+    });
+}
+type NewLinkValues = z.input<ReturnType<typeof newLinkFormSchema>>;
+
+/** The api's paths of a create request, as this form's fields. */
+function targetOf(path: string): IssueTarget<NewLinkField> {
+  if (path === 'name') return { field: 'name', label: LABELS.name };
+  if (path === 'design.rangeM') return { field: 'rangeText', label: LABELS.rangeText };
+  if (path === 'siteAId' || path === 'siteBId') return { field: path, label: 'Site' };
+  return null;
+}
 
 export function NewLinkRoute() {
   const styles = useStyles();
@@ -40,53 +74,39 @@ export function NewLinkRoute() {
   const role = useCurrentUser().data?.role;
   const sites = useSites();
   const createLink = useCreateLink();
-  const [name, setName] = useState('');
-  const [rangeText, setRangeText] = useState('');
-  const [siteAId, setSiteAId] = useState('');
-  const [siteBId, setSiteBId] = useState('');
-  const [errors, setErrors] = useState<Errors>({});
-  // Choosing either site changes the path, so the site and path errors no longer apply.
-  const clearSiteErrors = () => setErrors((current) => ({ ...current, siteAId: undefined, siteBId: undefined, rangeM: undefined }));
+  // the schema depends on the chosen sites; the resolver reads the latest one
+  const slantRangeRef = useRef<number | undefined>(undefined);
+  const form = useForm<NewLinkValues, unknown, z.output<ReturnType<typeof newLinkFormSchema>>>({
+    defaultValues: { name: '', siteAId: '', siteBId: '', rangeText: '' },
+    resolver: withFieldMessages((values, context, options) => zodResolver(newLinkFormSchema(slantRangeRef.current))(values, context, options), labelledMessage(LABELS)),
+    // the messages beside the fields are announced; the focus stays where the user is
+    shouldFocusError: false,
+  });
+  const { control, formState, handleSubmit, setError, clearErrors } = form;
+  const [siteAId, siteBId] = form.watch(['siteAId', 'siteBId']);
 
   // With both ends chosen, the path length follows from their coordinates and heights.
   const geometry = useSitePathGeometry(siteAId, siteBId)?.geometry ?? null;
+  slantRangeRef.current = geometry?.slantRangeM;
 
   if (role && !policies.canEditDesigns(role)) return <Navigate to={paths.app.links.getHref()} replace />;
 
-  const onSubmit = (event: FormEvent) => {
-    event.preventDefault();
-    const next: Errors = {};
-    if (name.trim() === '') next.name = 'Link name is required';
-    let rangeM = geometry?.slantRangeM;
-    if (rangeText.trim() !== '' || rangeM === undefined) {
-      const parsed = parseQuantity(rangeText, 'length', { defaultUnit: 'km', allowZero: false });
-      if (!parsed.ok) next.rangeM = `Path length ${parsed.reason === 'is empty' ? 'is required (or choose both sites)' : parsed.reason}`;
-      else rangeM = parsed.valueSi;
-    }
-    if (siteAId && siteAId === siteBId) next.siteBId = 'Site B must differ from site A';
-    setErrors(next);
-    if (Object.keys(next).length > 0 || rangeM === undefined) return;
+  const onSubmit = handleSubmit((values) => {
     createLink.mutate(
-      { name: name.trim(), design: starterDesign(rangeM), siteAId: siteAId || null, siteBId: siteBId || null, note: 'Created with typical starting values' },
+      { name: values.name, design: starterDesign(values.rangeM), siteAId: values.siteAId || null, siteBId: values.siteBId || null, note: 'Created with typical starting values' },
       {
         onSuccess: (link) => navigate(paths.app.link.getHref(link.id)),
         onError: (error) => {
-          if (isApiError(error, 400) && error.issues.length > 0) {
-            const mapped: Errors = {};
-            for (const issue of error.issues) {
-              if (issue.path === 'name') mapped.name = `Link name ${issue.message}`;
-              else if (issue.path === 'design.rangeM') mapped.rangeM = `Path length ${issue.message}`;
-              else if (issue.path === 'siteAId' || issue.path === 'siteBId') mapped[issue.path] = `Site ${issue.message}`;
-              else mapped.form = `${issue.path}: ${issue.message}`;
-            }
-            setErrors(mapped);
-          } else {
-            setErrors({ form: error instanceof Error ? error.message : 'The link could not be created.' });
-          }
+          const mapped = setApiFieldErrors(error, setError, targetOf);
+          if (!mapped) setError('root', { message: error instanceof Error ? error.message : 'The link could not be created.' });
+          else if (mapped.unmatched.length > 0) setError('root', { message: mapped.unmatched.map((issue) => `${issue.path}: ${issue.message}`).join('; ') });
         },
       },
     );
-  };
+  });
+  const errors = formState.errors;
+  // Choosing either site changes the path, so the site and path errors no longer apply.
+  const clearSiteErrors = () => clearErrors(['siteAId', 'siteBId', 'rangeText']);
 
   return (
     <Card className={styles.card}>
@@ -100,59 +120,56 @@ export function NewLinkRoute() {
         </div>
       </div>
       <form onSubmit={onSubmit} noValidate style={{ display: 'grid', rowGap: 16 }} aria-label="New link">
-        {errors.form && (
+        {errors.root && (
           <MessageBar intent="error">
-            <MessageBarBody>{errors.form}</MessageBarBody>
+            <MessageBarBody>{errors.root.message}</MessageBarBody>
           </MessageBar>
         )}
-        <Field label="Link name" required validationMessage={errors.name} validationState={errors.name ? 'error' : 'none'}>
-          <Input
-            value={name}
-            onChange={(_, data) => {
-              setName(data.value);
-              setErrors((current) => ({ ...current, name: undefined }));
-            }}
-            maxLength={200}
-            placeholder="e.g. Harbour office to depot"
-          />
-        </Field>
+        <Controller
+          name="name"
+          control={control}
+          render={({ field, fieldState }) => (
+            <Field label={LABELS.name} required validationMessage={fieldState.error?.message} validationState={fieldState.error ? 'error' : 'none'}>
+              <Input {...field} onChange={(_, data) => field.onChange(data.value)} maxLength={200} placeholder="e.g. Harbour office to depot" />
+            </Field>
+          )}
+        />
         <div className={styles.row}>
-          <SiteSelectField
-            label="Site A"
-            sites={sites.data}
-            value={siteAId}
-            error={errors.siteAId}
-            onChange={(value) => {
-              setSiteAId(value);
-              clearSiteErrors();
-            }}
-          />
-          <SiteSelectField
-            label="Site B"
-            sites={sites.data}
-            value={siteBId}
-            error={errors.siteBId}
-            onChange={(value) => {
-              setSiteBId(value);
-              clearSiteErrors();
-            }}
-          />
+          {(['siteAId', 'siteBId'] as const).map((name) => (
+            <Controller
+              key={name}
+              name={name}
+              control={control}
+              render={({ field, fieldState }) => (
+                <SiteSelectField
+                  label={LABELS[name]}
+                  sites={sites.data}
+                  value={field.value}
+                  error={fieldState.error?.message}
+                  onChange={(value) => {
+                    field.onChange(value);
+                    clearSiteErrors();
+                  }}
+                />
+              )}
+            />
+          ))}
         </div>
-        <Field
-          label="Path length"
-          required={!geometry}
-          validationMessage={errors.rangeM}
-          validationState={errors.rangeM ? 'error' : 'none'}
-          hint={geometry ? `From the two sites: ${formatDistance(geometry.slantRangeM)} slant range. Type a value to override it.` : 'e.g. 2.4 km or 850 m'}
-        >
-          <Input
-            value={rangeText}
-            onChange={(_, data) => {
-              setRangeText(data.value);
-              setErrors((current) => ({ ...current, rangeM: undefined }));
-            }}
-            placeholder={geometry ? formatDistance(geometry.slantRangeM) : 'e.g. 2.4 km'} />
-        </Field>
+        <Controller
+          name="rangeText"
+          control={control}
+          render={({ field, fieldState }) => (
+            <Field
+              label={LABELS.rangeText}
+              required={!geometry}
+              validationMessage={fieldState.error?.message}
+              validationState={fieldState.error ? 'error' : 'none'}
+              hint={geometry ? `From the two sites: ${formatDistance(geometry.slantRangeM)} slant range. Type a value to override it.` : 'e.g. 2.4 km or 850 m'}
+            >
+              <Input {...field} onChange={(_, data) => field.onChange(data.value)} placeholder={geometry ? formatDistance(geometry.slantRangeM) : 'e.g. 2.4 km'} />
+            </Field>
+          )}
+        />
         <Caption1 className={styles.muted}>The starting figures are illustrative, not a recommendation.</Caption1>
         <div className={styles.actions}>
           <Button onClick={() => navigate(paths.app.links.getHref())}>Cancel</Button>
@@ -164,6 +181,12 @@ export function NewLinkRoute() {
     </Card>
   );
 }
+
+/** Starts loading the site choices with the queryOptions useSites reads. */
+export const createLoader = (queryClient: QueryClient) => () => {
+  void queryClient.prefetchQuery(getSitesQueryOptions());
+  return null;
+};
 
 export const Component = NewLinkRoute;
 

@@ -1,4 +1,5 @@
-import { useState, type FormEvent } from 'react';
+import { Controller, useForm, type FieldError } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
 import {
   Button,
   Field,
@@ -9,8 +10,9 @@ import {
   makeStyles,
   tokens,
 } from '@fluentui/react-components';
-import { tooManySignInAttemptsMessage } from '@beamwright/link-core/contracts';
+import { LoginRequestSchema, TooManyRequestsBodySchema, tooManySignInAttemptsMessage, type LoginRequest } from '@beamwright/link-core/contracts';
 import { isApiError } from '@/lib/api-client';
+import { setApiFieldErrors, withFieldMessages } from '@/lib/form-errors';
 import { useSignIn } from '@/lib/auth';
 
 const useStyles = makeStyles({
@@ -18,66 +20,47 @@ const useStyles = makeStyles({
   submit: { justifySelf: 'stretch', marginTop: tokens.spacingVerticalS },
 });
 
-interface FieldErrors {
-  email?: string;
-  password?: string;
-}
+type SignInField = keyof LoginRequest;
 
-// A plain shape check: the api decides whether the account exists.
-const EMAIL_PATTERN = /^[^\s@]+@[^\s@]+\.[^\s@]+$/;
-
-function validate(email: string, password: string): FieldErrors {
-  const errors: FieldErrors = {};
-  if (email.trim() === '') errors.email = 'Enter your email address.';
-  else if (!EMAIL_PATTERN.test(email.trim())) errors.email = 'Enter an email address such as name@company.com.';
-  if (password === '') errors.password = 'Enter your password.';
-  return errors;
+/** The sign-in request's own schema, in words that tell a person what to type. */
+function describe(field: string, error: FieldError): string {
+  if (field === 'password') return 'Enter your password.';
+  return error.type === 'too_small' ? 'Enter your email address.' : 'Enter an email address such as name@company.com.';
 }
+const resolver = withFieldMessages(zodResolver(LoginRequestSchema), describe);
 
 export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
   const styles = useStyles();
   const signIn = useSignIn();
-  const [email, setEmail] = useState('');
-  const [password, setPassword] = useState('');
-  const [fieldErrors, setFieldErrors] = useState<FieldErrors>({});
-  const [formError, setFormError] = useState<string | null>(null);
+  const { control, formState, handleSubmit, setError } = useForm({
+    defaultValues: { email: '', password: '' },
+    resolver,
+    shouldFocusError: false,
+  });
+  const formError = formState.errors.root?.message;
 
-  const onSubmit = (event: FormEvent) => {
-    event.preventDefault();
-    const errors = validate(email, password);
-    setFieldErrors(errors);
-    setFormError(null);
-    if (errors.email || errors.password) return;
-    signIn.mutate(
-      { email: email.trim(), password },
-      {
-        onSuccess: onSignedIn,
-        onError: (error) => {
-          if (isApiError(error, 401)) {
-            // Same words for an unknown account and a wrong password: ids must not leak.
-            setFieldErrors({ password: 'The email address or password is not correct.' });
-            return;
-          }
-          if (isApiError(error, 400) && error.issues.length > 0) {
-            const next: FieldErrors = {};
-            for (const issue of error.issues) {
-              if (issue.path === 'email' || issue.path === 'password') next[issue.path] = issue.message;
-            }
-            setFieldErrors(next);
-            if (!next.email && !next.password) setFormError(error.message);
-            return;
-          }
-          if (isApiError(error, 429)) {
-            // the wait comes from Retry-After (or the body's retryAfterS); the api's own words otherwise
-            const retryAfterS = error.retryAfterS ?? (typeof error.body?.retryAfterS === 'number' ? error.body.retryAfterS : null);
-            setFormError(retryAfterS !== null ? tooManySignInAttemptsMessage(retryAfterS) : error.message);
-            return;
-          }
-          setFormError(error instanceof Error ? error.message : 'Signing in failed. Try again.');
-        },
+  const onSubmit = handleSubmit((request) => {
+    signIn.mutate(request, {
+      onSuccess: onSignedIn,
+      onError: (error) => {
+        if (isApiError(error, 401)) {
+          // Same words for an unknown account and a wrong password: ids must not leak.
+          setError('password', { type: 'server', message: 'The email address or password is not correct.' });
+          return;
+        }
+        if (isApiError(error, 429)) {
+          // the wait comes from Retry-After (or the body's retryAfterS); the api's own words otherwise
+          const body = TooManyRequestsBodySchema.safeParse(error.body);
+          const retryAfterS = error.retryAfterS ?? (body.success ? body.data.retryAfterS : null);
+          setError('root', { message: retryAfterS !== null ? tooManySignInAttemptsMessage(retryAfterS) : error.message });
+          return;
+        }
+        // the api's reasons are shown as they come, beside their field
+        const mapped = setApiFieldErrors<SignInField>(error, setError, (path) => (path === 'email' || path === 'password' ? { field: path } : null));
+        if (!mapped || mapped.fieldCount === 0) setError('root', { message: error instanceof Error ? error.message : 'Signing in failed. Try again.' });
       },
-    );
-  };
+    });
+  });
 
   return (
     <form className={styles.form} onSubmit={onSubmit} noValidate aria-label="Sign in">
@@ -86,26 +69,24 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
           <MessageBarBody>{formError}</MessageBarBody>
         </MessageBar>
       )}
-      <Field label="Email address" required validationMessage={fieldErrors.email} validationState={fieldErrors.email ? 'error' : 'none'}>
-        <Input
-          type="email"
-          name="email"
-          autoComplete="username"
-          value={email}
-          onChange={(_, data) => setEmail(data.value)}
-          size="large"
-        />
-      </Field>
-      <Field label="Password" required validationMessage={fieldErrors.password} validationState={fieldErrors.password ? 'error' : 'none'}>
-        <Input
-          type="password"
-          name="password"
-          autoComplete="current-password"
-          value={password}
-          onChange={(_, data) => setPassword(data.value)}
-          size="large"
-        />
-      </Field>
+      <Controller
+        name="email"
+        control={control}
+        render={({ field, fieldState }) => (
+          <Field label="Email address" required validationMessage={fieldState.error?.message} validationState={fieldState.error ? 'error' : 'none'}>
+            <Input {...field} type="email" autoComplete="username" onChange={(_, data) => field.onChange(data.value)} size="large" />
+          </Field>
+        )}
+      />
+      <Controller
+        name="password"
+        control={control}
+        render={({ field, fieldState }) => (
+          <Field label="Password" required validationMessage={fieldState.error?.message} validationState={fieldState.error ? 'error' : 'none'}>
+            <Input {...field} type="password" autoComplete="current-password" onChange={(_, data) => field.onChange(data.value)} size="large" />
+          </Field>
+        )}
+      />
       <Button
         type="submit"
         appearance="primary"

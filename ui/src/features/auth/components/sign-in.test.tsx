@@ -60,7 +60,7 @@ describe('sign-in page', () => {
       },
     ]);
     renderApp('/sign-in');
-    await userEvent.type(await screen.findByLabelText(/Email address/), 'x@y.z');
+    await userEvent.type(await screen.findByLabelText(/Email address/), 'x@y.example');
     await userEvent.type(screen.getByLabelText(/Password/), 'p');
     await userEvent.click(screen.getByRole('button', { name: 'Sign in' }));
     expect(await screen.findByText('must be an e-mail address')).toBeInTheDocument();

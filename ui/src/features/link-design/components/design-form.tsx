@@ -2,16 +2,13 @@ import { memo, type ReactNode } from 'react';
 import {
   Caption1,
   Field,
-  Input,
   Select,
   Subtitle2,
   Switch,
-  Tooltip,
   makeStyles,
   mergeClasses,
   tokens,
 } from '@fluentui/react-components';
-import { CircleSmallFilled } from '@fluentui/react-icons';
 import { ATMOSPHERE_MODELS } from '@beamwright/link-core';
 import {
   ATMOSPHERE_MODEL_LABELS,
@@ -19,15 +16,13 @@ import {
   SECTION_TITLES,
   TURBULENCE_MODEL_LABELS,
   VISIBILITY_DEFINITION_LABELS,
-  WIDTH_DEFINITIONS,
-  WIDTH_DEFINITION_LABELS,
   fieldsOfSection,
   type DesignSection,
   type QuantityFieldId,
-  type WidthDefinition,
 } from '@/features/link-design/design-fields';
 import type { AngleExtent, DesignDraft, WidthExtent } from '@/features/link-design/design-draft';
 import { formatAngle, formatLength } from '@/lib/format';
+import { DefinitionSelect, QuantityInput } from '@/features/link-design/components/quantity-input';
 
 const useStyles = makeStyles({
   form: { display: 'grid', rowGap: tokens.spacingVerticalL },
@@ -56,11 +51,6 @@ const useStyles = makeStyles({
     alignItems: 'start',
   },
   wide: { gridColumn: '1 / -1' },
-  // value, then its definition pickers; they wrap under the value when the column is narrow
-  row: { display: 'flex', flexWrap: 'wrap', columnGap: tokens.spacingHorizontalS, rowGap: tokens.spacingVerticalXS },
-  input: { fontVariantNumeric: 'tabular-nums' },
-  rowInput: { flexGrow: 1, flexBasis: '110px', minWidth: 0 },
-  edited: { color: tokens.colorPaletteMarigoldForeground1, verticalAlign: 'middle' },
   note: { color: tokens.colorNeutralForeground3 },
 });
 
@@ -79,88 +69,6 @@ export interface DesignFormProps {
   receiverExtras?: ReactNode;
   /** shown under the path length (what the two sites say) */
   pathExtras?: ReactNode;
-}
-
-function EditedMark({ show }: { show: boolean }) {
-  const styles = useStyles();
-  if (!show) return null;
-  return (
-    <Tooltip content="Changed since the stored revision" relationship="label">
-      <CircleSmallFilled className={styles.edited} />
-    </Tooltip>
-  );
-}
-
-function QuantityInput({
-  id,
-  draft,
-  errors,
-  changed,
-  onTextChange,
-  extra,
-  hint,
-  className,
-}: {
-  id: QuantityFieldId;
-  draft: DesignDraft;
-  errors: DesignFormProps['errors'];
-  changed: boolean;
-  onTextChange: DesignFormProps['onTextChange'];
-  extra?: ReactNode;
-  hint?: ReactNode;
-  className?: string;
-}) {
-  const styles = useStyles();
-  const field = QUANTITY_FIELDS[id];
-  const error = errors[id];
-  const input = (
-    <Input
-      className={mergeClasses(styles.input, extra ? styles.rowInput : undefined)}
-      name={id}
-      value={draft.text[id]}
-      placeholder={`e.g. ${field.example}`}
-      onChange={(_, data) => onTextChange(id, data.value)}
-      autoComplete="off"
-      spellCheck={false}
-      aria-describedby={undefined}
-    />
-  );
-  return (
-    <Field
-      className={className}
-      label={
-        <>
-          {field.label} <EditedMark show={changed} />
-        </>
-      }
-      required={!field.optional}
-      validationState={error ? 'error' : 'none'}
-      validationMessage={error}
-      hint={(hint ?? field.hint ?? (field.optional ? `Optional. e.g. ${field.example}` : `e.g. ${field.example}`)) as string}
-      data-field={id}
-    >
-      {extra ? (
-        <div className={styles.row}>
-          {input}
-          {extra}
-        </div>
-      ) : (
-        input
-      )}
-    </Field>
-  );
-}
-
-function DefinitionSelect({ value, onChange, label }: { value: WidthDefinition; onChange: (value: WidthDefinition) => void; label: string }) {
-  return (
-    <Select value={value} onChange={(_, data) => onChange(data.value as WidthDefinition)} aria-label={label}>
-      {WIDTH_DEFINITIONS.map((definition) => (
-        <option key={definition} value={definition}>
-          {WIDTH_DEFINITION_LABELS[definition].split(' ')[0]}
-        </option>
-      ))}
-    </Select>
-  );
 }
 
 function DesignFormView({ draft, errors, changedFieldIds, onTextChange, onUpdate, resolved, powerNote, transmitterExtras, receiverExtras, pathExtras }: DesignFormProps) {

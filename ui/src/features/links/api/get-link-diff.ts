@@ -1,14 +1,14 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { RevisionDiffResponse } from '@beamwright/link-core/contracts';
 import { api } from '@/lib/api-client';
-
-import type { RevisionDiffResponse } from '@/features/links/api/types';
+import { linkKeys } from '@/lib/query-keys';
 
 export const getLinkDiff = (linkId: string, from: number, to: number, signal?: AbortSignal) =>
   api.get<RevisionDiffResponse>(`/links/${encodeURIComponent(linkId)}/diff`, { signal, params: { from, to } });
 
 export const getLinkDiffQueryOptions = (linkId: string, from: number, to: number) =>
   queryOptions({
-    queryKey: ['links', 'diff', linkId, from, to],
+    queryKey: linkKeys.diff(linkId, from, to),
     queryFn: ({ signal }) => getLinkDiff(linkId, from, to, signal),
     staleTime: Number.POSITIVE_INFINITY,
   });

@@ -1,21 +1,11 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
+import type { LinkListResponse } from '@beamwright/link-core/contracts';
 import { api } from '@/lib/api-client';
-import type { LinkListResponse, LinkStatus } from '@/features/links/api/types';
+import { linkKeys, type LinkListParams } from '@/lib/query-keys';
 
-export type LinkSortField = 'name' | 'status' | 'linkMarginDb' | 'rangeM' | 'wavelengthM' | 'updatedAt';
+export type LinkSortField = LinkListParams['sort'];
 
-export interface LinksQuery {
-  page: number;
-  pageSize: number;
-  sort: LinkSortField;
-  order: 'asc' | 'desc';
-  status?: LinkStatus;
-  q?: string;
-  /** archived links: hidden unless `include` (with the others) or `only` */
-  archived?: 'include' | 'only';
-}
-
-export const getLinks = (query: LinksQuery, signal?: AbortSignal) =>
+export const getLinks = (query: LinkListParams, signal?: AbortSignal) =>
   api.get<LinkListResponse>('/links', {
     signal,
     params: {
@@ -29,11 +19,11 @@ export const getLinks = (query: LinksQuery, signal?: AbortSignal) =>
     },
   });
 
-export const getLinksQueryOptions = (query: LinksQuery) =>
+export const getLinksQueryOptions = (query: LinkListParams) =>
   queryOptions({
-    queryKey: ['links', 'list', query],
+    queryKey: linkKeys.list(query),
     queryFn: ({ signal }) => getLinks(query, signal),
     placeholderData: keepPreviousData,
   });
 
-export const useLinks = (query: LinksQuery) => useQuery(getLinksQueryOptions(query));
+export const useLinks = (query: LinkListParams) => useQuery(getLinksQueryOptions(query));

@@ -1,6 +1,6 @@
 import { Badge } from '@fluentui/react-components';
 import { ArchiveRegular, LocationRegular } from '@fluentui/react-icons';
-import type { LinkSummary } from '@/features/links/api/types';
+import type { LinkSummary } from '@beamwright/link-core/contracts';
 
 /**
  * The marks beside a link's status: "Changed since approval" when a site under an approved or

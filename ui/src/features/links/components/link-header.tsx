@@ -7,7 +7,7 @@ import { formatDateTime, formatDb } from '@/lib/format';
 import { LinkStatusBadge } from '@/features/links/components/link-status-badge';
 import { LinkFlags } from '@/features/links/components/link-flags';
 import { LinkLifecycleActions } from '@/features/links/components/link-lifecycle-actions';
-import type { LinkDetail } from '@/features/links/api/types';
+import type { LinkDetail } from '@beamwright/link-core/contracts';
 
 const useStyles = makeStyles({
   root: { display: 'flex', flexWrap: 'wrap', alignItems: 'flex-end', justifyContent: 'space-between', columnGap: tokens.spacingHorizontalL, rowGap: tokens.spacingVerticalS, marginBottom: tokens.spacingVerticalL },

@@ -4,7 +4,7 @@ import userEvent from '@testing-library/user-event';
 import { demoEngineer, mockApi, renderApp } from '@/testing/test-utils';
 import { LINK_ID, linkDetailOf } from '@/testing/link-fixtures';
 import { setSessionToken } from '@/lib/session-token';
-import type { LinkDetail } from '@/features/links/api/types';
+import type { LinkDetail } from '@beamwright/link-core/contracts';
 
 // ECharts cannot draw in jsdom.
 vi.mock('@/components/charts/lazy-echart', () => ({

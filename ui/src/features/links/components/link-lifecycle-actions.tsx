@@ -4,7 +4,7 @@ import { ArchiveRegular, ArrowUndoRegular, DeleteRegular } from '@fluentui/react
 import { allowedLinkActions } from '@beamwright/link-core/contracts';
 import { useCurrentUser } from '@/lib/auth';
 import { LIFECYCLE_TEXT, useConfirmLinkLifecycle, type LinkLifecycleStep } from '@/features/links/components/link-lifecycle-dialog';
-import type { LinkDetail } from '@/features/links/api/types';
+import type { LinkDetail } from '@beamwright/link-core/contracts';
 
 const STEP_ICON: Record<LinkLifecycleStep, ReactElement> = { delete: <DeleteRegular />, archive: <ArchiveRegular />, restore: <ArrowUndoRegular /> };
 

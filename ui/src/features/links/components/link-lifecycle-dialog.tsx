@@ -15,9 +15,10 @@ import {
   Spinner,
 } from '@fluentui/react-components';
 import { paths } from '@/config/paths';
+import { linkKeys } from '@/lib/query-keys';
 import { useSetLinkArchived } from '@/features/links/api/archive-link';
 import { useDeleteLink } from '@/features/links/api/delete-link';
-import type { LinkDetail } from '@/features/links/api/types';
+import type { LinkDetail } from '@beamwright/link-core/contracts';
 
 export type LinkLifecycleStep = 'delete' | 'archive' | 'restore';
 
@@ -81,7 +82,7 @@ export function LinkLifecycleDialogHost({ children }: { children: ReactNode }) {
         onSuccess: () => {
           setOpen(false);
           navigate(paths.app.links.getHref(), { replace: true });
-          queryClient.removeQueries({ queryKey: ['links', 'detail', link.id] });
+          queryClient.removeQueries({ queryKey: linkKeys.detail(link.id) });
         },
         onError,
       });

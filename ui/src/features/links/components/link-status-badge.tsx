@@ -17,10 +17,6 @@ export function normaliseStatus(status: string): string {
   return status.toLowerCase().replace(/[\s_-]/g, '');
 }
 
-export function linkStatusLabel(status: string): string {
-  return STATUS_LOOK[normaliseStatus(status)]?.label ?? status;
-}
-
 export function LinkStatusBadge({ status }: { status: string }) {
   const look = STATUS_LOOK[normaliseStatus(status)] ?? { label: status, color: 'subtle' as const, icon: <QuestionCircleRegular /> };
   return (

@@ -22,7 +22,7 @@ import { formatDateTime, formatDistance, formatRelativeTime, formatWavelength } 
 import { MarginBadge } from '@/components/ui/margin-verdict';
 import { LinkStatusBadge } from '@/features/links/components/link-status-badge';
 import { LinkFlags } from '@/features/links/components/link-flags';
-import type { LinkSummary } from '@/features/links/api/types';
+import type { LinkSummary } from '@beamwright/link-core/contracts';
 import type { LinkSortField } from '@/features/links/api/get-links';
 
 const useStyles = makeStyles({

@@ -1,6 +1,6 @@
 import { Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, Text, makeStyles, tokens } from '@fluentui/react-components';
 import { CheckmarkStarburstRegular } from '@fluentui/react-icons';
-import type { RevisionSummary } from '@/features/links/api/types';
+import type { RevisionSummary } from '@beamwright/link-core/contracts';
 import { MarginBadge } from '@/components/ui/margin-verdict';
 import { formatDateTime, formatDistance, formatWavelength } from '@/lib/format';
 

@@ -1,4 +1,6 @@
 import { useRef, useState, type ReactElement } from 'react';
+import { Controller, useForm, type FieldError } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
 import {
   Body1,
   Button,
@@ -18,7 +20,16 @@ import {
   tokens,
 } from '@fluentui/react-components';
 import { ArrowReplyRegular, CheckmarkRegular, PlugConnectedRegular, SendRegular } from '@fluentui/react-icons';
-import { allowedReviewActions, type LinkStatus, type ReviewAction, type Role } from '@beamwright/link-core/contracts';
+import {
+  ReturnRevisionRequestSchema,
+  ReviewCommentRequestSchema,
+  allowedReviewActions,
+  type LinkStatus,
+  type ReviewAction,
+  type ReviewCommentRequest,
+  type Role,
+} from '@beamwright/link-core/contracts';
+import { setApiFieldErrors, withFieldMessages } from '@/lib/form-errors';
 import { useActOnRevision } from '@/features/reviews/api/act-on-revision';
 
 const useStyles = makeStyles({
@@ -61,6 +72,15 @@ const ACTION_SPECS: Record<ReviewAction, ActionSpec> = {
   install: { action: 'install', label: 'Record as installed', title: 'Record as installed', explain: 'Marks the approved revision as the one mounted and aligned on site.', commentRequired: false, icon: <PlugConnectedRegular />, appearance: 'secondary' },
 };
 
+const REQUIRED_COMMENT = 'A comment is required: tell the engineer what to change.';
+
+/** A returned revision needs a comment (the api's own rule); the other steps take one optionally. */
+function commentResolver(commentRequired: boolean) {
+  const describe = (_field: string, error: FieldError) => (commentRequired && error.message === 'is required' ? REQUIRED_COMMENT : `Comment ${error.message}`);
+  return withFieldMessages(zodResolver(commentRequired ? ReturnRevisionRequestSchema : ReviewCommentRequestSchema), describe);
+}
+const resolvers = { required: commentResolver(true), optional: commentResolver(false) };
+
 /** The buttons the shared rules (allowedReviewActions) give this caller on this link. */
 function actionsFor(role: Role | undefined, status: LinkStatus, isAuthor: boolean): ActionSpec[] {
   return allowedReviewActions(role, status, isAuthor).map((action) => ACTION_SPECS[action]);
@@ -87,39 +107,39 @@ export function ReviewActions({
   const styles = useStyles();
   const act = useActOnRevision(linkId);
   const [open, setOpen] = useState<ActionSpec | null>(null);
-  const [comment, setComment] = useState('');
-  const [commentError, setCommentError] = useState<string | null>(null);
-  const [error, setError] = useState<string | null>(null);
+  // the resolver follows the step being confirmed
+  const openRef = useRef<ActionSpec | null>(null);
+  openRef.current = open;
+  const form = useForm<ReviewCommentRequest, unknown, { comment: string }>({
+    defaultValues: { comment: '' },
+    resolver: (values, context, options) => (openRef.current?.commentRequired ? resolvers.required : resolvers.optional)(values, context, options),
+    shouldFocusError: false,
+  });
+  const error = form.formState.errors.root?.message ?? null;
   const [outcome, setOutcome] = useState<string | null>(null);
   const outcomeRef = useRef<HTMLSpanElement>(null);
   // The button that opened the dialog is usually gone once the status moves on: focus goes to the outcome instead.
   const focusOutcomeAfterClose = useRef(false);
   const actions = archived ? [] : actionsFor(role, status, isAuthor);
 
-  const submit = () => {
+  const submit = form.handleSubmit(({ comment }) => {
     if (!open) return;
-    if (open.commentRequired && comment.trim() === '') {
-      setCommentError('A comment is required: tell the engineer what to change.');
-      return;
-    }
-    setError(null);
     act.mutate(
-      { revision, action: open.action, comment: comment.trim() },
+      { revision, action: open.action, comment },
       {
         onSuccess: () => {
           focusOutcomeAfterClose.current = true;
           setOutcome(OUTCOME_TEXT[open.action](revision));
           setOpen(null);
-          setComment('');
+          form.reset();
         },
         onError: (failure) => {
-          const issue = (failure as { issues?: { path: string; message: string }[] }).issues?.find((candidate) => candidate.path === 'comment');
-          if (issue) setCommentError(`Comment ${issue.message}`);
-          else setError(failure instanceof Error ? failure.message : 'The action failed.');
+          const mapped = setApiFieldErrors(failure, form.setError, (path) => (path === 'comment' ? { field: 'comment', label: 'Comment' } : null));
+          if (!mapped || mapped.fieldCount === 0) form.setError('root', { message: failure instanceof Error ? failure.message : 'The action failed.' });
         },
       },
     );
-  };
+  });
 
   return (
     <>
@@ -140,8 +160,7 @@ export function ReviewActions({
               onClick={() => {
                 setOpen(spec);
                 setOutcome(null);
-                setCommentError(null);
-                setError(null);
+                form.clearErrors();
               }}
             >
               {spec.label}
@@ -167,23 +186,21 @@ export function ReviewActions({
             </DialogTitle>
             <DialogContent className={styles.dialog}>
               <Body1>{open?.explain}</Body1>
-              <Field
-                label="Comment"
-                required={open?.commentRequired}
-                validationMessage={commentError ?? undefined}
-                validationState={commentError ? 'error' : 'none'}
-                hint={open?.commentRequired ? undefined : 'Optional.'}
-              >
-                <Textarea
-                  value={comment}
-                  onChange={(_, data) => {
-                    setComment(data.value);
-                    if (data.value.trim()) setCommentError(null);
-                  }}
-                  resize="vertical"
-                  maxLength={4000}
-                />
-              </Field>
+              <Controller
+                name="comment"
+                control={form.control}
+                render={({ field, fieldState }) => (
+                  <Field
+                    label="Comment"
+                    required={open?.commentRequired}
+                    validationMessage={fieldState.error?.message}
+                    validationState={fieldState.error ? 'error' : 'none'}
+                    hint={open?.commentRequired ? undefined : 'Optional.'}
+                  >
+                    <Textarea {...field} value={field.value ?? ''} onChange={(_, data) => field.onChange(data.value)} resize="vertical" maxLength={4000} />
+                  </Field>
+                )}
+              />
               {error && (
                 <MessageBar intent="error">
                   <MessageBarBody>{error}</MessageBarBody>
@@ -192,7 +209,7 @@ export function ReviewActions({
             </DialogContent>
             <DialogActions>
               <Button onClick={() => setOpen(null)}>Cancel</Button>
-              <Button appearance="primary" onClick={submit} disabled={act.isPending} icon={act.isPending ? <Spinner size="tiny" /> : open?.icon}>
+              <Button appearance="primary" onClick={() => void submit()} disabled={act.isPending} icon={act.isPending ? <Spinner size="tiny" /> : open?.icon}>
                 {open?.label}
               </Button>
             </DialogActions>

@@ -1,0 +1,41 @@
+import type { z } from 'zod';
+import type { EquipmentKind, LinkListQuerySchema } from '@beamwright/link-core/contracts';
+
+// The query keys of every feature, general to specific, so one prefix invalidates a whole family
+// (TanStack Query's key-factory pattern). They live together because they nest across features:
+// a link's reviews, revisions and diffs sit under its detail key, and invalidating the detail
+// refreshes them too. Reads and writes use these factories only, never a key written by hand.
+
+/** A links list request as the list screen sends it: the contract's query, parsed (defaults applied). */
+export type LinkListParams = Omit<z.output<typeof LinkListQuerySchema>, 'siteId'>;
+
+export const authKeys = {
+  all: ['auth'] as const,
+  me: () => [...authKeys.all, 'me'] as const,
+};
+
+export const linkKeys = {
+  all: ['links'] as const,
+  lists: () => [...linkKeys.all, 'list'] as const,
+  list: (query: LinkListParams) => [...linkKeys.lists(), query] as const,
+  details: () => [...linkKeys.all, 'detail'] as const,
+  detail: (linkId: string) => [...linkKeys.details(), linkId] as const,
+  revisions: (linkId: string) => [...linkKeys.detail(linkId), 'revisions'] as const,
+  diff: (linkId: string, from: number, to: number) => [...linkKeys.detail(linkId), 'diff', { from, to }] as const,
+};
+
+/** The review trail of a link sits under the link: a change to the link refreshes its trail. */
+export const reviewKeys = {
+  forLink: (linkId: string) => [...linkKeys.detail(linkId), 'reviews'] as const,
+};
+
+export const siteKeys = {
+  all: ['sites'] as const,
+  lists: () => [...siteKeys.all, 'list'] as const,
+};
+
+export const equipmentKeys = {
+  all: ['equipment'] as const,
+  lists: () => [...equipmentKeys.all, 'list'] as const,
+  list: (kind: EquipmentKind) => [...equipmentKeys.lists(), { kind }] as const,
+};
