@@ -9,7 +9,7 @@ import { LinkDesignSchema, type LinkDesignInput } from '../schemas/link-design.s
 import { BEAM_WAVE_FADE_DESCRIPTION, FOG_ATTENUATION_DESCRIPTION, POINTING_OUTAGE_DESCRIPTION, TERM_DESCRIPTIONS, type TermDescription } from './budget-terms.js';
 import { emptyResolvedDesign, evaluateChain, resolveDesign, resolveDesignInto, specificAttenuationDbPerKm, type ChainResult, type ResolvedDesign } from './link-chain.js';
 import { logOffsetAnnularCapture } from '../capture/capture.js';
-import { captureFallsFromCentre, exactOutagePointingLossDb } from '../pointing/exact-pointing.js';
+import { captureFallsFromCentre, exactOutagePointingLossDb, probabilityOfCaptureBelowRising, ricianOutageRadius } from '../pointing/exact-pointing.js';
 import { normalQuantileOf } from '../turbulence/normal.js';
 
 // The description is passed in (not looked up by key) so that each call site stays monomorphic.
@@ -144,16 +144,48 @@ function hiddenPointingOutage(design: ResolvedDesign, chain: ChainResult): { los
     const lowerBoundDb = (2 * DB_PER_NEPER * lowerRadiusM * (lowerRadiusM - 2 * apertureRadiusM)) / (beamRadiusM * beamRadiusM);
     if (lowerBoundDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB) return { lossDb: lowerBoundDb, exact: false };
   }
+  const logCentre = -(chain.geometricLossDb + chain.turbulenceBeamSpreadLossDb) / DB_PER_NEPER;
+  const lossAt = (offsetM: number) => -DB_PER_NEPER * (logOffsetAnnularCapture(beamRadiusM, apertureRadiusM, obscurationRadiusM, offsetM) - logCentre);
   if (captureFallsFromCentre(beamRadiusM, apertureRadiusM, obscurationRadiusM)) {
     // C falls with r: the exact captures at the two radii bound the quantile more tightly.
-    const logCentre = -(chain.geometricLossDb + chain.turbulenceBeamSpreadLossDb) / DB_PER_NEPER;
-    const lossAt = (offsetM: number) => -DB_PER_NEPER * (logOffsetAnnularCapture(beamRadiusM, apertureRadiusM, obscurationRadiusM, offsetM) - logCentre);
     const lowerLossDb = lossAt(lowerRadiusM);
     if (lowerLossDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB) return { lossDb: lowerLossDb, exact: false };
     if (!(lossAt(upperRadiusM) - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB)) return undefined;
+    const lossDb = exactOutagePointingLossDb(beamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM, HIDDEN_OUTAGE_PROBABILITY);
+    return lossDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB ? { lossDb, exact: true } : undefined;
   }
-  const lossDb = exactOutagePointingLossDb(beamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM, HIDDEN_OUTAGE_PROBABILITY);
-  return lossDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB ? { lossDb, exact: true } : undefined;
+  return hiddenPointingOutageRising(chain.pointingLossDb, beamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM, logCentre, lossAt);
+}
+
+/**
+ * The hidden-outage decision where C rises from the centre (heavy obscuration), without solving
+ * for the quantile. With r_p the radius R exceeds with 1e-3 and C unimodal (derived):
+ * {C < C(r_p)} holds [0, r_p) or (r_p, ∞), so P(C(R) < C(r_p)) ≥ p and the loss L_q exceeded with
+ * p is at least L(r_p); when C(r_p) ≤ C(0) it equals L(r_p) ({C < C(r_p)} = (r_p, ∞)); otherwise
+ * {C < C(0)} = (r0, ∞) with r0 > r_p, so L_q < 0. What these leave open (a mean gain of more than
+ * 1 dB) is decided by P(C(R) < c) > p at the level c of the mean loss plus 1 dB: two crossings.
+ */
+function hiddenPointingOutageRising(
+  meanLossDb: number,
+  beamRadiusM: number,
+  apertureRadiusM: number,
+  obscurationRadiusM: number,
+  jitterM: number,
+  biasM: number,
+  logCentre: number,
+  lossAt: (offsetM: number) => number,
+): { lossDb: number; exact: boolean } | undefined {
+  const outageRadiusM = ricianOutageRadius(jitterM, biasM, HIDDEN_OUTAGE_PROBABILITY);
+  // C is flat to second order at the centre; the exact quantile takes it as C(0) there (exact-pointing.ts).
+  const lossAtRadiusDb = outageRadiusM < 1e-6 * beamRadiusM ? 0 : lossAt(outageRadiusM);
+  if (lossAtRadiusDb - meanLossDb > HIDDEN_OUTAGE_EXCESS_DB) return { lossDb: lossAtRadiusDb, exact: lossAtRadiusDb >= 0 };
+  if (lossAtRadiusDb >= 0 || !(-meanLossDb > HIDDEN_OUTAGE_EXCESS_DB)) return undefined;
+  // L(r_p) < 0 and L(r_p) ≤ mean + 1 dB < 0: the level c = C(0)·10^(−(mean + 1 dB)/10) lies in (C(0), C(r_p)].
+  const thresholdDb = meanLossDb + HIDDEN_OUTAGE_EXCESS_DB;
+  const logLevel = logCentre - thresholdDb / DB_PER_NEPER;
+  const below = probabilityOfCaptureBelowRising(beamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM, logLevel, outageRadiusM);
+  // P(C(R) < c) > p: the quantile lies below c, i.e. L_q > mean + 1 dB (stated as a lower bound).
+  return below > HIDDEN_OUTAGE_PROBABILITY ? { lossDb: thresholdDb, exact: false } : undefined;
 }
 const NORMAL_RADIUS_AT_HIDDEN_OUTAGE = -normalQuantileOf(HIDDEN_OUTAGE_PROBABILITY);
 const DB_PER_NEPER = 10 / Math.LN10;

@@ -160,6 +160,42 @@ function logCaptureQuantileRising(beamRadiusM: number, apertureRadiusM: number, 
 }
 
 /**
+ * P(C(R) < c) where C rises from the centre (heavy obscuration), for a level c between the centred
+ * capture and the capture at r_p: C(0) < c ≤ C(r_p). C rises to a single peak and then falls
+ * (derived), so {C < c} = [0, r1) ∪ (r2, ∞) with r1 the one crossing in [0, r_p] and r2 the one
+ * beyond r_p: two bracketed roots and two Marcum Q1 values, no search for the peak. Comparing this
+ * with p decides whether the p-quantile of C(R) lies below c without solving for the quantile.
+ *
+ * @param beamRadiusM W [m], > 0
+ * @param apertureRadiusM a [m], > b
+ * @param obscurationRadiusM b [m], > 0
+ * @param jitterSigmaPerAxisM σ [m], > 0
+ * @param staticOffsetM ν [m], ≥ 0
+ * @param logLevel ln c, in (ln C(0), ln C(r_p)]
+ * @param outageRadiusM r_p [m], the radius R exceeds with the outage probability
+ * @returns P(C(R) < c) in [0, 1]
+ * @see Marcum (1960); the two-crossing form is derived.
+ */
+export function probabilityOfCaptureBelowRising(
+  beamRadiusM: number,
+  apertureRadiusM: number,
+  obscurationRadiusM: number,
+  jitterSigmaPerAxisM: number,
+  staticOffsetM: number,
+  logLevel: number,
+  outageRadiusM: number,
+): number {
+  const excess = (offsetM: number): number => logOffsetAnnularCapture(beamRadiusM, apertureRadiusM, obscurationRadiusM, offsetM) - logLevel;
+  const inner = findRootBrent(excess, 0, outageRadiusM, { xTolerance: 1e-13 * outageRadiusM });
+  let step = beamRadiusM;
+  while (excess(outageRadiusM + step) > 0) step *= 2;
+  const upper = outageRadiusM + step;
+  const outer = findRootBrent(excess, outageRadiusM, upper, { xTolerance: 1e-13 * upper });
+  const offset = staticOffsetM / jitterSigmaPerAxisM;
+  return marcumQ1Complement(offset, inner / jitterSigmaPerAxisM) + marcumQ1(offset, outer / jitterSigmaPerAxisM);
+}
+
+/**
  * Pointing loss exceeded with probability p given the outage radius r_p (see
  * {@link exactOutagePointingLossDb}); the budget computes r_p once per design, range-free.
  */
