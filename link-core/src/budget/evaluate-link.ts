@@ -11,6 +11,7 @@ import { emptyResolvedDesign, evaluateChain, resolveDesign, resolveDesignInto, s
 import { logOffsetAnnularCapture } from '../capture/capture.js';
 import { captureFallsFromCentre, exactOutagePointingLossDb, probabilityOfCaptureBelowRising, ricianOutageRadius } from '../pointing/exact-pointing.js';
 import { normalQuantileOf } from '../turbulence/normal.js';
+import { toFixedTwo } from './budget-text.js';
 
 // The description is passed in (not looked up by key) so that each call site stays monomorphic.
 function term(key: BudgetTermKey, description: TermDescription, valueDb: number): BudgetTerm {
@@ -30,7 +31,7 @@ function collectChecks(design: ResolvedDesign, receivedPowerDbm: number, diffrac
     checks.push({
       key: 'pointing-mean-hides-outage',
       severity: 'warning',
-      message: `The mean pointing loss (${chain.pointingLossDb.toFixed(2)} dB) hides outages: the pointing loss exceeded 0.1 % of the time is ${hiddenOutage.exact ? '' : 'at least '}${hiddenOutage.lossDb.toFixed(2)} dB. Budget the pointing at an outage probability (for example 1e-3) to hold margin against it.`,
+      message: `The mean pointing loss (${toFixedTwo(chain.pointingLossDb)} dB) hides outages: the pointing loss exceeded 0.1 % of the time is ${hiddenOutage.exact ? '' : 'at least '}${toFixedTwo(hiddenOutage.lossDb)} dB. Budget the pointing at an outage probability (for example 1e-3) to hold margin against it.`,
     });
   }
   if (design.halfAngleDivergenceRad > 0 && design.halfAngleDivergenceRad <= diffractionRad) {
