@@ -146,16 +146,20 @@ function hiddenPointingOutage(design: ResolvedDesign, chain: ChainResult): { los
     if (lowerBoundDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB) return { lossDb: lowerBoundDb, exact: false };
   }
   const logCentre = -(chain.geometricLossDb + chain.turbulenceBeamSpreadLossDb) / DB_PER_NEPER;
-  const lossAt = (offsetM: number) => -DB_PER_NEPER * (logOffsetAnnularCapture(beamRadiusM, apertureRadiusM, obscurationRadiusM, offsetM) - logCentre);
   if (captureFallsFromCentre(beamRadiusM, apertureRadiusM, obscurationRadiusM)) {
     // C falls with r: the exact captures at the two radii bound the quantile more tightly.
-    const lowerLossDb = lossAt(lowerRadiusM);
+    const lowerLossDb = offsetLossDb(beamRadiusM, apertureRadiusM, obscurationRadiusM, lowerRadiusM, logCentre);
     if (lowerLossDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB) return { lossDb: lowerLossDb, exact: false };
-    if (!(lossAt(upperRadiusM) - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB)) return undefined;
+    if (!(offsetLossDb(beamRadiusM, apertureRadiusM, obscurationRadiusM, upperRadiusM, logCentre) - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB)) return undefined;
     const lossDb = exactOutagePointingLossDb(beamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM, HIDDEN_OUTAGE_PROBABILITY);
     return lossDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB ? { lossDb, exact: true } : undefined;
   }
-  return hiddenPointingOutageRising(chain.pointingLossDb, beamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM, logCentre, lossAt);
+  return hiddenPointingOutageRising(chain.pointingLossDb, beamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM, logCentre);
+}
+
+/** −10·log10(C(r)/C(0)) from ln C(0) at hand (a plain function: no closure per budget). */
+function offsetLossDb(beamRadiusM: number, apertureRadiusM: number, obscurationRadiusM: number, offsetM: number, logCentre: number): number {
+  return -DB_PER_NEPER * (logOffsetAnnularCapture(beamRadiusM, apertureRadiusM, obscurationRadiusM, offsetM) - logCentre);
 }
 
 /**
@@ -174,11 +178,10 @@ function hiddenPointingOutageRising(
   jitterM: number,
   biasM: number,
   logCentre: number,
-  lossAt: (offsetM: number) => number,
 ): { lossDb: number; exact: boolean } | undefined {
   const outageRadiusM = ricianOutageRadius(jitterM, biasM, HIDDEN_OUTAGE_PROBABILITY);
   // C is flat to second order at the centre; the exact quantile takes it as C(0) there (exact-pointing.ts).
-  const lossAtRadiusDb = outageRadiusM < 1e-6 * beamRadiusM ? 0 : lossAt(outageRadiusM);
+  const lossAtRadiusDb = outageRadiusM < 1e-6 * beamRadiusM ? 0 : offsetLossDb(beamRadiusM, apertureRadiusM, obscurationRadiusM, outageRadiusM, logCentre);
   if (lossAtRadiusDb - meanLossDb > HIDDEN_OUTAGE_EXCESS_DB) return { lossDb: lossAtRadiusDb, exact: lossAtRadiusDb >= 0 };
   if (lossAtRadiusDb >= 0 || !(-meanLossDb > HIDDEN_OUTAGE_EXCESS_DB)) return undefined;
   // L(r_p) < 0 and L(r_p) ≤ mean + 1 dB < 0: the level c = C(0)·10^(−(mean + 1 dB)/10) lies in (C(0), C(r_p)].

@@ -54,18 +54,15 @@ export function ricianOutageRadius(jitterSigmaPerAxisM: number, staticOffsetM: n
   let lower = Math.max(rayleigh, offset - normalQuantileOf(outageProbability)) * (1 - 1e-12);
   let upper = (offset + rayleigh) * (1 + 1e-12);
   const noncentrality = offset * offset;
-  const logSurvival = (threshold: number): number => {
-    // the allocation-free series where it applies, the general Q1 (quadrature for large offsets) elsewhere
-    const sf = noncentralChiSquare2TailsFast(threshold * threshold, noncentrality).sf;
-    return Math.log(sf === sf ? sf : marcumQ1(offset, threshold));
-  };
   // Newton on ln Q1(a, r) − ln p (slope −f_Rice(r)/Q1), kept inside the bracket by bisection.
   // Start at the midpoint, or for a large bias at its Gaussian limit ν − Φ⁻¹(p) + 1/(2ν) (σ units),
   // which is already close: one or two Newton steps then reach the root.
   const gaussianLimit = offset - normalQuantileOf(outageProbability) + 0.5 / offset;
   let r = offset > 10 && gaussianLimit > lower && gaussianLimit < upper ? gaussianLimit : 0.5 * (lower + upper);
   for (let i = 0; i < 100; i++) {
-    const residual = logSurvival(r) - logP;
+    // the allocation-free series where it applies, the general Q1 (quadrature for large offsets) elsewhere
+    const sf = noncentralChiSquare2TailsFast(r * r, noncentrality).sf;
+    const residual = Math.log(sf === sf ? sf : marcumQ1(offset, r)) - logP;
     if (residual > 0) lower = r;
     else upper = r;
     const density = r * Math.exp(-0.5 * (r - offset) * (r - offset)) * besselI0Scaled(offset * r);
