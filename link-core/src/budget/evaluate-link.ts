@@ -9,8 +9,9 @@ import { LinkDesignSchema, type LinkDesignInput } from '../schemas/link-design.s
 import { BEAM_WAVE_FADE_DESCRIPTION, FOG_ATTENUATION_DESCRIPTION, POINTING_OUTAGE_DESCRIPTION, TERM_DESCRIPTIONS, type TermDescription } from './budget-terms.js';
 import { emptyResolvedDesign, evaluateChain, resolveDesign, resolveDesignInto, specificAttenuationDbPerKm, type ChainResult, type ResolvedDesign } from './link-chain.js';
 import { logOffsetAnnularCapture } from '../capture/capture.js';
-import { captureFallsFromCentre, exactOutagePointingLossDb } from '../pointing/exact-pointing.js';
+import { captureFallsFromCentre, exactOutagePointingLossDb, probabilityOfCaptureBelowRising, ricianOutageRadius } from '../pointing/exact-pointing.js';
 import { normalQuantileOf } from '../numeric/normal.js';
+import { toFixedTwo } from './budget-text.js';
 import { DB_PER_NATURAL_LOG_POWER as DB_PER_NEPER } from '../units/constants.js';
 
 // The description is passed in (not looked up by key) so that each call site stays monomorphic.
@@ -31,7 +32,7 @@ function collectChecks(design: ResolvedDesign, receivedPowerDbm: number, diffrac
     checks.push({
       key: 'pointing-mean-hides-outage',
       severity: 'warning',
-      message: `The mean pointing loss (${chain.pointingLossDb.toFixed(2)} dB) hides outages: the pointing loss exceeded 0.1 % of the time is ${hiddenOutage.exact ? '' : 'at least '}${hiddenOutage.lossDb.toFixed(2)} dB. Budget the pointing at an outage probability (for example 1e-3) to hold margin against it.`,
+      message: `The mean pointing loss (${toFixedTwo(chain.pointingLossDb)} dB) hides outages: the pointing loss exceeded 0.1 % of the time is ${hiddenOutage.exact ? '' : 'at least '}${toFixedTwo(hiddenOutage.lossDb)} dB. Budget the pointing at an outage probability (for example 1e-3) to hold margin against it.`,
     });
   }
   if (design.halfAngleDivergenceRad > 0 && design.halfAngleDivergenceRad <= diffractionRad) {
@@ -145,16 +146,51 @@ function hiddenPointingOutage(design: ResolvedDesign, chain: ChainResult): { los
     const lowerBoundDb = (2 * DB_PER_NEPER * lowerRadiusM * (lowerRadiusM - 2 * apertureRadiusM)) / (beamRadiusM * beamRadiusM);
     if (lowerBoundDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB) return { lossDb: lowerBoundDb, exact: false };
   }
+  const logCentre = -(chain.geometricLossDb + chain.turbulenceBeamSpreadLossDb) / DB_PER_NEPER;
   if (captureFallsFromCentre(beamRadiusM, apertureRadiusM, obscurationRadiusM)) {
     // C falls with r: the exact captures at the two radii bound the quantile more tightly.
-    const logCentre = -(chain.geometricLossDb + chain.turbulenceBeamSpreadLossDb) / DB_PER_NEPER;
-    const lossAt = (offsetM: number) => -DB_PER_NEPER * (logOffsetAnnularCapture(beamRadiusM, apertureRadiusM, obscurationRadiusM, offsetM) - logCentre);
-    const lowerLossDb = lossAt(lowerRadiusM);
+    const lowerLossDb = offsetLossDb(beamRadiusM, apertureRadiusM, obscurationRadiusM, lowerRadiusM, logCentre);
     if (lowerLossDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB) return { lossDb: lowerLossDb, exact: false };
-    if (!(lossAt(upperRadiusM) - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB)) return undefined;
+    if (!(offsetLossDb(beamRadiusM, apertureRadiusM, obscurationRadiusM, upperRadiusM, logCentre) - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB)) return undefined;
+    const lossDb = exactOutagePointingLossDb(beamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM, HIDDEN_OUTAGE_PROBABILITY);
+    return lossDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB ? { lossDb, exact: true } : undefined;
   }
-  const lossDb = exactOutagePointingLossDb(beamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM, HIDDEN_OUTAGE_PROBABILITY);
-  return lossDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB ? { lossDb, exact: true } : undefined;
+  return hiddenPointingOutageRising(chain.pointingLossDb, beamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM, logCentre);
+}
+
+/** −10·log10(C(r)/C(0)) from ln C(0) at hand (a plain function: no closure per budget). */
+function offsetLossDb(beamRadiusM: number, apertureRadiusM: number, obscurationRadiusM: number, offsetM: number, logCentre: number): number {
+  return -DB_PER_NEPER * (logOffsetAnnularCapture(beamRadiusM, apertureRadiusM, obscurationRadiusM, offsetM) - logCentre);
+}
+
+/**
+ * The hidden-outage decision where C rises from the centre (heavy obscuration), without solving
+ * for the quantile. With r_p the radius R exceeds with 1e-3 and C unimodal (derived):
+ * {C < C(r_p)} holds [0, r_p) or (r_p, ∞), so P(C(R) < C(r_p)) ≥ p and the loss L_q exceeded with
+ * p is at least L(r_p); when C(r_p) ≤ C(0) it equals L(r_p) ({C < C(r_p)} = (r_p, ∞)); otherwise
+ * {C < C(0)} = (r0, ∞) with r0 > r_p, so L_q < 0. What these leave open (a mean gain of more than
+ * 1 dB) is decided by P(C(R) < c) > p at the level c of the mean loss plus 1 dB: two crossings.
+ */
+function hiddenPointingOutageRising(
+  meanLossDb: number,
+  beamRadiusM: number,
+  apertureRadiusM: number,
+  obscurationRadiusM: number,
+  jitterM: number,
+  biasM: number,
+  logCentre: number,
+): { lossDb: number; exact: boolean } | undefined {
+  const outageRadiusM = ricianOutageRadius(jitterM, biasM, HIDDEN_OUTAGE_PROBABILITY);
+  // C is flat to second order at the centre; the exact quantile takes it as C(0) there (exact-pointing.ts).
+  const lossAtRadiusDb = outageRadiusM < 1e-6 * beamRadiusM ? 0 : offsetLossDb(beamRadiusM, apertureRadiusM, obscurationRadiusM, outageRadiusM, logCentre);
+  if (lossAtRadiusDb - meanLossDb > HIDDEN_OUTAGE_EXCESS_DB) return { lossDb: lossAtRadiusDb, exact: lossAtRadiusDb >= 0 };
+  if (lossAtRadiusDb >= 0 || !(-meanLossDb > HIDDEN_OUTAGE_EXCESS_DB)) return undefined;
+  // L(r_p) < 0 and L(r_p) ≤ mean + 1 dB < 0: the level c = C(0)·10^(−(mean + 1 dB)/10) lies in (C(0), C(r_p)].
+  const thresholdDb = meanLossDb + HIDDEN_OUTAGE_EXCESS_DB;
+  const logLevel = logCentre - thresholdDb / DB_PER_NEPER;
+  const below = probabilityOfCaptureBelowRising(beamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM, logLevel, outageRadiusM);
+  // P(C(R) < c) > p: the quantile lies below c, i.e. L_q > mean + 1 dB (stated as a lower bound).
+  return below > HIDDEN_OUTAGE_PROBABILITY ? { lossDb: thresholdDb, exact: false } : undefined;
 }
 const NORMAL_RADIUS_AT_HIDDEN_OUTAGE = -normalQuantileOf(HIDDEN_OUTAGE_PROBABILITY);
 

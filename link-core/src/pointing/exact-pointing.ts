@@ -54,18 +54,15 @@ export function ricianOutageRadius(jitterSigmaPerAxisM: number, staticOffsetM: n
   let lower = Math.max(rayleigh, offset - normalQuantileOf(outageProbability)) * (1 - 1e-12);
   let upper = (offset + rayleigh) * (1 + 1e-12);
   const noncentrality = offset * offset;
-  const logSurvival = (threshold: number): number => {
-    // the allocation-free series where it applies, the general Q1 (quadrature for large offsets) elsewhere
-    const sf = noncentralChiSquare2TailsFast(threshold * threshold, noncentrality).sf;
-    return Math.log(sf === sf ? sf : marcumQ1(offset, threshold));
-  };
   // Newton on ln Q1(a, r) − ln p (slope −f_Rice(r)/Q1), kept inside the bracket by bisection.
   // Start at the midpoint, or for a large bias at its Gaussian limit ν − Φ⁻¹(p) + 1/(2ν) (σ units),
   // which is already close: one or two Newton steps then reach the root.
   const gaussianLimit = offset - normalQuantileOf(outageProbability) + 0.5 / offset;
   let r = offset > 10 && gaussianLimit > lower && gaussianLimit < upper ? gaussianLimit : 0.5 * (lower + upper);
   for (let i = 0; i < 100; i++) {
-    const residual = logSurvival(r) - logP;
+    // the allocation-free series where it applies, the general Q1 (quadrature for large offsets) elsewhere
+    const sf = noncentralChiSquare2TailsFast(r * r, noncentrality).sf;
+    const residual = Math.log(sf === sf ? sf : marcumQ1(offset, r)) - logP;
     if (residual > 0) lower = r;
     else upper = r;
     const density = r * Math.exp(-0.5 * (r - offset) * (r - offset)) * besselI0Scaled(offset * r);
@@ -157,6 +154,42 @@ function logCaptureQuantileRising(beamRadiusM: number, apertureRadiusM: number, 
   let low = Math.min(logCentre, logPeak) - 1;
   while (logBelow(low) > 0) low -= 2 * (high - low);
   return findRootBrent(logBelow, low, high, { xTolerance: 1e-13 * Math.max(1, Math.abs(low)) });
+}
+
+/**
+ * P(C(R) < c) where C rises from the centre (heavy obscuration), for a level c between the centred
+ * capture and the capture at r_p: C(0) < c ≤ C(r_p). C rises to a single peak and then falls
+ * (derived), so {C < c} = [0, r1) ∪ (r2, ∞) with r1 the one crossing in [0, r_p] and r2 the one
+ * beyond r_p: two bracketed roots and two Marcum Q1 values, no search for the peak. Comparing this
+ * with p decides whether the p-quantile of C(R) lies below c without solving for the quantile.
+ *
+ * @param beamRadiusM W [m], > 0
+ * @param apertureRadiusM a [m], > b
+ * @param obscurationRadiusM b [m], > 0
+ * @param jitterSigmaPerAxisM σ [m], > 0
+ * @param staticOffsetM ν [m], ≥ 0
+ * @param logLevel ln c, in (ln C(0), ln C(r_p)]
+ * @param outageRadiusM r_p [m], the radius R exceeds with the outage probability
+ * @returns P(C(R) < c) in [0, 1]
+ * @see Marcum (1960); the two-crossing form is derived.
+ */
+export function probabilityOfCaptureBelowRising(
+  beamRadiusM: number,
+  apertureRadiusM: number,
+  obscurationRadiusM: number,
+  jitterSigmaPerAxisM: number,
+  staticOffsetM: number,
+  logLevel: number,
+  outageRadiusM: number,
+): number {
+  const excess = (offsetM: number): number => logOffsetAnnularCapture(beamRadiusM, apertureRadiusM, obscurationRadiusM, offsetM) - logLevel;
+  const inner = findRootBrent(excess, 0, outageRadiusM, { xTolerance: 1e-13 * outageRadiusM });
+  let step = beamRadiusM;
+  while (excess(outageRadiusM + step) > 0) step *= 2;
+  const upper = outageRadiusM + step;
+  const outer = findRootBrent(excess, outageRadiusM, upper, { xTolerance: 1e-13 * upper });
+  const offset = staticOffsetM / jitterSigmaPerAxisM;
+  return marcumQ1Complement(offset, inner / jitterSigmaPerAxisM) + marcumQ1(offset, outer / jitterSigmaPerAxisM);
 }
 
 /**
