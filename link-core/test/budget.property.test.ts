@@ -7,6 +7,10 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { availabilityFromRecords, beamEnvelope, evaluateLink, launchBeamRadiusAtRangeM, formatZodIssues, linkMarginAtRangeDb, LinkDesignSchema, maxRange, type LinkDesignInput } from '../src/index.js';
 
+// A fixed seed: every run (and CI) checks the same designs, and a failure replays exactly. Change
+// it locally to explore other designs.
+fc.configureGlobal({ seed: 20261203 });
+
 // exp(log x) can round a hair outside [min, max]: clamp so the bounds themselves stay reachable.
 const logUniform = (min: number, max: number) =>
   fc.double({ min: Math.log(min), max: Math.log(max), noNaN: true }).map((log) => Math.min(max, Math.max(min, Math.exp(log))));
@@ -51,6 +55,17 @@ const designArbitrary: fc.Arbitrary<LinkDesignInput> = fc.record({
   scintillation: fc.record({ include: fc.boolean(), probability: logUniform(1e-9, 0.5) }),
   systemMarginDb: fc.double({ min: 0, max: 60, noNaN: true }),
 });
+
+/**
+ * True when the beam is on the receiver at this range (a pointing term under 10 dB): the range
+ * properties hold for aligned links. A beam pointed many beam radii off the receiver is left out,
+ * since with Cn² > 0 the Gaussian-beam spread really can bring its edge closer in relative terms,
+ * so its margin may rise with range (METHODS.md §6.11).
+ */
+function beamOnReceiver(design: LinkDesignInput, rangeM: number): boolean {
+  const pointing = evaluateLink({ ...design, rangeM }).terms.find((term) => term.key === 'pointingLoss');
+  return pointing !== undefined && pointing.valueDb > -10;
+}
 
 describe('link budget properties', () => {
   it('the beam envelope (waist and Rayleigh range from the q parameter) follows the launched beam everywhere', () => {
@@ -141,7 +156,7 @@ describe('link budget properties', () => {
         // left out, since with Cn² > 0 the Gaussian-beam spread can bring its edge closer in
         // relative terms; the tolerance allows the rounding of margins of thousands of dB.
         const nearMarginDb = linkMarginAtRangeDb(calm, near);
-        fc.pre(nearMarginDb > -1000);
+        fc.pre(nearMarginDb > -1000 && beamOnReceiver(calm, near));
         expect(linkMarginAtRangeDb(calm, far)).toBeLessThanOrEqual(nearMarginDb + 1e-9 + 1e-12 * Math.abs(nearMarginDb));
       }),
       { numRuns: 500 },
@@ -171,7 +186,7 @@ describe('link budget properties', () => {
         // out: there the turbulence spread, growing faster than the range, really does bring the
         // beam's edge closer in relative terms (Gaussian-beam model), so the margin may rise.
         const nearMarginDb = linkMarginAtRangeDb(turbulent, near);
-        fc.pre(nearMarginDb > -1000);
+        fc.pre(nearMarginDb > -1000 && beamOnReceiver(turbulent, near));
         expect(linkMarginAtRangeDb(turbulent, far)).toBeLessThanOrEqual(nearMarginDb + 1e-6 + 1e-10 * Math.abs(nearMarginDb));
       }),
       { numRuns: 300 },

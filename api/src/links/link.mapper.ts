@@ -1,6 +1,7 @@
 import { currentEngineFigures } from '@beamwright/link-core';
 import type {
   Approval,
+  CurrentEngine,
   LinkDetail,
   LinkSummary,
   ReviewEntry,
@@ -23,8 +24,15 @@ function toSiteRef(site: Site | null | undefined): SiteRef | null {
   return site ? { id: site.id, name: site.name } : null;
 }
 
-/** Needs `owner`, `siteA` and `siteB` loaded. */
-export function toLinkSummary(link: Link): LinkSummary {
+/**
+ * Needs `owner`, `siteA` and `siteB` loaded. `latest` (the latest revision) is read only for an
+ * approved or installed link: the list flags those whose current-engine margin is below the
+ * required one.
+ */
+export function toLinkSummary(link: Link, latest?: LinkRevision): LinkSummary {
+  const signedOff = link.status === 'approved' || link.status === 'installed';
+  const currentEngine: CurrentEngine | null =
+    signedOff && latest ? currentEngineFigures(latest.design, latest.linkCoreVersion, latest.budget.linkMarginDb) : null;
   return {
     id: link.id,
     name: link.name,
@@ -41,6 +49,7 @@ export function toLinkSummary(link: Link): LinkSummary {
     changedSinceApproval: link.pathChangedAt !== null,
     archivedAt: link.archivedAt?.toISOString() ?? null,
     archived: link.archivedAt !== null,
+    currentEngine,
     createdAt: link.createdAt.toISOString(),
     updatedAt: link.updatedAt.toISOString(),
   };

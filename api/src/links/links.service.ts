@@ -99,7 +99,22 @@ export class LinksService implements OnModuleInit {
     builder.orderBy(SORT_COLUMNS[query.sort], direction).addOrderBy('link.id', 'ASC');
     builder.skip((query.page - 1) * query.pageSize).take(query.pageSize);
     const [rows, total] = await builder.getManyAndCount();
-    return { items: rows.map(toLinkSummary), page: query.page, pageSize: query.pageSize, total };
+    const latest = await this.findSignedOffLatestRevisions(rows);
+    return { items: rows.map((link) => toLinkSummary(link, latest.get(link.id))), page: query.page, pageSize: query.pageSize, total };
+  }
+
+  /**
+   * The latest revision of each approved or installed link of a page, in one query: the list puts
+   * the current engine's margin beside those an older engine computed.
+   */
+  private async findSignedOffLatestRevisions(rows: Link[]): Promise<Map<string, LinkRevision>> {
+    const signedOff = rows.filter((link) => link.status === 'approved' || link.status === 'installed');
+    if (signedOff.length === 0) return new Map();
+    const revisions = await this.revisions.find({
+      select: { linkId: true, revisionNumber: true, design: true, budget: true, linkCoreVersion: true },
+      where: signedOff.map((link) => ({ linkId: link.id, revisionNumber: link.latestRevision })),
+    });
+    return new Map(revisions.map((revision) => [revision.linkId, revision]));
   }
 
   async get(caller: AuthUser, id: string): Promise<LinkDetail> {

@@ -411,6 +411,34 @@ describe('chart samplers', () => {
     expect(envelope.rayleighRangeEndWithinPath).toBe(false);
   });
 
+  it('beamEnvelope adds the long-term radius of the Gaussian-beam model, as the budget computes it at each distance', () => {
+    // a narrow collimated beam over 3 km in moderate turbulence
+    const narrow = variant((d) => {
+      d.rangeM = 3000;
+      d.transmitter.waistRadiusM = 0.005;
+      delete d.transmitter.halfAngleDivergenceRad;
+      d.atmosphere.cn2 = 1e-14;
+      d.atmosphere.turbulenceModel = 'gaussian-beam';
+    });
+    const envelope = beamEnvelope(narrow, { points: 7 });
+    const longTerm = envelope.longTermBeamRadiusM!;
+    expect(longTerm).toHaveLength(7);
+    expect(longTerm[0]).toBe(0.005); // no path, no spread
+    envelope.distanceM.forEach((distanceM, i) => {
+      if (i === 0) return;
+      const atDistance = evaluateLink({ ...narrow, rangeM: distanceM });
+      expect(Math.abs(longTerm[i]! / atDistance.longTermBeamRadiusM! - 1)).toBeLessThan(1e-12);
+      expect(Math.abs(envelope.beamRadiusM[i]! / atDistance.beamRadiusAtReceiverM - 1)).toBeLessThan(1e-9);
+      expect(longTerm[i]!).toBeGreaterThan(envelope.beamRadiusM[i]!);
+    });
+    const receiver = evaluateLink(narrow);
+    expect(Math.abs(longTerm[6]! / receiver.longTermBeamRadiusM! - 1)).toBeLessThan(1e-12);
+    expect(receiver.longTermBeamRadiusM! / receiver.beamRadiusAtReceiverM).toBeGreaterThan(1.02); // 3.3 % wider at the receiver here
+
+    expect(beamEnvelope(variant((d) => (d.atmosphere.turbulenceModel = 'spherical-wave'))).longTermBeamRadiusM).toBeUndefined();
+    expect(beamEnvelope(variant((d) => ((d.atmosphere.turbulenceModel = 'gaussian-beam'), (d.atmosphere.cn2 = 0)))).longTermBeamRadiusM).toBeUndefined();
+  });
+
   it('marks the Rayleigh range of a collimated beam at πW0²/(M²λ) from the aperture', () => {
     const design = variant((d) => {
       delete d.transmitter.halfAngleDivergenceRad;

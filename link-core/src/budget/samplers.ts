@@ -3,6 +3,8 @@
  * envelope along the path. Plain arrays, ready for a chart library; pure and cheap (no terms built).
  */
 import type { LinkDesignInput } from '../schemas/link-design.schema.js';
+import { launchBeamRadiusAtRangeM } from '../beam/launch.js';
+import { beamWaveAtReceiverFast } from '../turbulence/beam-wave.js';
 import { evaluateChain, resolveDesign, specificAttenuationDbPerKm } from './link-chain.js';
 
 /** Options of {@link marginVsRange}. */
@@ -122,6 +124,11 @@ export interface BeamEnvelope {
   distanceM: number[];
   /** 1/e² beam radius [m] */
   beamRadiusM: number[];
+  /**
+   * long-term (turbulence-spread, wander included) 1/e² radius W_LT [m] at each distance, as the
+   * budget computes it at its receiver; present only for the Gaussian-beam model with Cn² > 0
+   */
+  longTermBeamRadiusM?: number[];
   /** receive aperture radius [m], to draw against the beam at the far end */
   receiveApertureRadiusM: number;
   /** 1/e² beam radius at the transmit aperture W0 [m] */
@@ -147,6 +154,9 @@ export interface BeamEnvelope {
  * launch (F0 < 0) is a Gaussian whose waist lies behind the aperture: with the complex beam
  * parameter 1/q = 1/R − i/z_R0 at the aperture (R = −F0 > 0, z_R0 = πW0²/(M²λ)),
  * q = z_w + i·z_R gives the distance z_w from the virtual waist and its Rayleigh range z_R.
+ * With the Gaussian-beam turbulence model and Cn² > 0 it adds the long-term radius W_LT(z), each
+ * sample computed as the budget computes it for a receiver at z (METHODS.md, the beam-wave model;
+ * W_LT(0) = W0: no path, no spread), so the last sample is the budget's `longTermBeamRadiusM`.
  *
  * @param design the link design
  * @param options number of samples
@@ -189,6 +199,14 @@ export function beamEnvelope(design: LinkDesignInput, options: BeamEnvelopeOptio
     const relative = (distanceM - waistPositionM) / rayleighRangeM;
     envelope.distanceM.push(distanceM);
     envelope.beamRadiusM.push(waistRadiusM * Math.sqrt(1 + relative * relative));
+  }
+  if (resolved.gaussianBeam && resolved.cn2 > 0) {
+    const { wavelengthM, halfAngleDivergenceRad, m2, cn2 } = resolved;
+    envelope.longTermBeamRadiusM = envelope.distanceM.map((distanceM) => {
+      if (distanceM === 0) return w0;
+      const freeSpaceM = launchBeamRadiusAtRangeM(wavelengthM, w0, halfAngleDivergenceRad, m2, distanceM);
+      return beamWaveAtReceiverFast(wavelengthM, w0, halfAngleDivergenceRad, m2, distanceM, cn2, freeSpaceM, false).longTermBeamRadiusM;
+    });
   }
   return envelope;
 }

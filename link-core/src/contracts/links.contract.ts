@@ -77,6 +77,21 @@ export type SiteRef = z.infer<typeof SiteRefSchema>;
 export const ApprovalSchema = z.object({ by: UserRefSchema, at: IsoDateTimeSchema });
 export type Approval = z.infer<typeof ApprovalSchema>;
 
+/**
+ * The current engine's figures beside a revision computed by an older engine (null when the
+ * revision's own engine is the current one). The stored budget is never recomputed in place.
+ */
+export const CurrentEngineSchema = z.object({
+  linkCoreVersion: z.string(),
+  linkMarginDb: z.number(),
+  receivedPowerDbm: z.number(),
+  /** current minus stored margin [dB] */
+  marginChangeDb: z.number(),
+  /** the current engine's margin is below the required 3 dB */
+  belowRequiredMargin: z.boolean(),
+});
+export type CurrentEngine = z.infer<typeof CurrentEngineSchema>;
+
 /** One row of the links table: the link with figures of its latest revision. */
 export const LinkSummarySchema = z.object({
   id: z.uuid(),
@@ -101,6 +116,12 @@ export const LinkSummarySchema = z.object({
   /** when the link was archived; null while it is not */
   archivedAt: IsoDateTimeSchema.nullable(),
   archived: z.boolean(),
+  /**
+   * the current engine's figures for an approved or installed link whose latest revision an older
+   * engine computed (null otherwise; optional: added in 0.2.0). The list flags
+   * `belowRequiredMargin`.
+   */
+  currentEngine: CurrentEngineSchema.nullable().optional(),
   createdAt: IsoDateTimeSchema,
   updatedAt: IsoDateTimeSchema,
 });
@@ -108,21 +129,6 @@ export type LinkSummary = z.infer<typeof LinkSummarySchema>;
 
 export const LinkListResponseSchema = pageOf(LinkSummarySchema);
 export type LinkListResponse = z.infer<typeof LinkListResponseSchema>;
-
-/**
- * The current engine's figures beside a revision computed by an older engine (null when the
- * revision's own engine is the current one). The stored budget is never recomputed in place.
- */
-export const CurrentEngineSchema = z.object({
-  linkCoreVersion: z.string(),
-  linkMarginDb: z.number(),
-  receivedPowerDbm: z.number(),
-  /** current minus stored margin [dB] */
-  marginChangeDb: z.number(),
-  /** the current engine's margin is below the required 3 dB */
-  belowRequiredMargin: z.boolean(),
-});
-export type CurrentEngine = z.infer<typeof CurrentEngineSchema>;
 
 /** One immutable revision: the design as stored (defaults applied) and the budget computed at save time. */
 export const RevisionSchema = z.object({

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { beamEnvelope, evaluateLink, marginVsRange } from '@beamwright/link-core';
-import { beamEnvelopeOption, marginVsRangeOption, waterfallSteps } from '@/features/link-design/charts/chart-options';
+import { beamEnvelopeData, beamEnvelopeOption, LONG_TERM_RADIUS_NAME, marginVsRangeOption, waterfallSteps } from '@/features/link-design/charts/chart-options';
 import { workedExampleDesign } from '@/testing/designs';
 
 describe('chart options', () => {
@@ -27,6 +27,47 @@ describe('chart options', () => {
     const design = { ...workedExampleDesign, transmitter: { ...workedExampleDesign.transmitter, halfAngleDivergenceRad: undefined }, receiver: { ...workedExampleDesign.receiver, apertureDiameterM: 0.2 } };
     const option = beamEnvelopeOption(beamEnvelope(design), 'light') as { yAxis: { max: number } };
     expect(option.yAxis.max).toBeGreaterThanOrEqual(100); // mm: the 100 mm aperture radius fits
+  });
+
+  it('plots the long-term radius of the Gaussian-beam model as its own named series, and lists it in the table from the same points', () => {
+    // a narrow collimated beam over 3 km, Cn² = 1e-14, Gaussian-beam model
+    const narrow = {
+      ...workedExampleDesign,
+      rangeM: 3000,
+      transmitter: { ...workedExampleDesign.transmitter, waistRadiusM: 0.005, halfAngleDivergenceRad: undefined },
+      atmosphere: { ...workedExampleDesign.atmosphere, cn2: 1e-14, turbulenceModel: 'gaussian-beam' as const },
+    };
+    const envelope = beamEnvelope(narrow, { points: 21 });
+    const option = beamEnvelopeOption(envelope, 'light') as {
+      legend: { data: string[] };
+      series: { name: string; data: [number, number][]; lineStyle: { type?: string } }[];
+    };
+    expect(option.legend.data).toEqual(['Beam radius', LONG_TERM_RADIUS_NAME]);
+    const longTerm = option.series.find((series) => series.name === LONG_TERM_RADIUS_NAME)!;
+    expect(longTerm.lineStyle.type).toBe('dashed'); // not told by colour alone
+    // mm on the axis; the last point is the budget's long-term radius at the receiver
+    const budget = evaluateLink(narrow);
+    expect(longTerm.data.at(-1)![0]).toBe(3);
+    expect(longTerm.data.at(-1)![1]).toBeCloseTo(budget.longTermBeamRadiusM! * 1e3, 9);
+    expect(longTerm.data.at(-1)![1]).toBeGreaterThan(budget.beamRadiusAtReceiverM * 1e3);
+
+    const table = beamEnvelopeData(envelope);
+    expect(table.columns).toEqual(['Distance from the transmitter (km)', 'Beam 1/e² radius (mm)', 'Long-term 1/e² radius in turbulence (mm)']);
+    const beam = option.series.find((series) => series.name === 'Beam radius')!;
+    expect(table.rows).toEqual(beam.data.map(([distance, radius], index) => [distance, radius, longTerm.data[index]![1]]));
+  });
+
+  it('draws no long-term radius for the spherical-wave model or without turbulence', () => {
+    for (const atmosphere of [
+      { ...workedExampleDesign.atmosphere, turbulenceModel: 'spherical-wave' as const },
+      { ...workedExampleDesign.atmosphere, cn2: 0, turbulenceModel: 'gaussian-beam' as const },
+    ]) {
+      const envelope = beamEnvelope({ ...workedExampleDesign, atmosphere });
+      const option = beamEnvelopeOption(envelope, 'light') as { legend?: unknown; series: { name: string }[] };
+      expect(option.legend).toBeUndefined();
+      expect(option.series.map((series) => series.name)).toEqual(['Beam radius', 'Beam radius (lower edge)']);
+      expect(beamEnvelopeData(envelope).columns).toHaveLength(2);
+    }
   });
 
   it('marks the design range and the zero-margin line on the margin-against-range chart', () => {

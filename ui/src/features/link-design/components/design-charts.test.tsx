@@ -53,6 +53,25 @@ describe('chart text alternatives', () => {
     });
   });
 
+  it('lists the long-term radius of the Gaussian-beam model beside the beam radius, from the points it plots', async () => {
+    render(
+      <FluentProvider theme={lightTheme}>
+        <DesignCharts design={workedExampleDesign} budget={budget} requiredMarginDb={3} />
+      </FluentProvider>,
+    );
+    const card = screen.getByTestId('chart-beam').closest('section')!;
+    await userEvent.click(within(card).getByRole('button', { name: /Show the values as a table/ }));
+    const rows = within(await screen.findByTestId('chart-beam-table')).getAllByRole('row');
+    expect(rows[0]).toHaveTextContent(/Long-term 1\/e² radius in turbulence \((mm|m)\)/);
+    const series = plotted.get('chart-beam')!.series as unknown as { name: string; data: [number, number][] }[];
+    const longTerm = series.find((entry) => entry.name === 'Long-term radius (turbulence)')!.data;
+    expect(rows.length - 1).toBe(longTerm.length);
+    longTerm.forEach(([, radius], index) => {
+      const cell = within(rows[index + 1]!).getAllByRole('cell')[2]!.textContent ?? '';
+      expect(Math.abs(readNumber(cell) - radius)).toBeLessThanOrEqual(Math.abs(radius) * 5e-4 + 1e-12);
+    });
+  });
+
   it('gives every margin in the tables its verdict word, as the headline does', async () => {
     const far = { ...workedExampleDesign, rangeM: 4000 };
     render(

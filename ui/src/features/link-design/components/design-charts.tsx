@@ -172,7 +172,7 @@ export function DesignCharts({ design, budget, requiredMarginDb }: DesignChartsP
     <div className={styles.grid}>
       <ChartCard
         title="Beam along the path"
-        caption={`${rayleighText} Receive aperture radius ${formatLength(envelope.receiveApertureRadiusM)}; beam 1/e² radius at the receiver ${formatLength(budget.beamRadiusAtReceiverM)}.`}
+        caption={`${rayleighText} Receive aperture radius ${formatLength(envelope.receiveApertureRadiusM)}; beam 1/e² radius at the receiver ${formatLength(budget.beamRadiusAtReceiverM)}.${envelope.longTermBeamRadiusM ? ` The dashed violet line is the long-term radius in turbulence (beam spread and wander, Gaussian-beam model): ${formatLength(envelope.longTermBeamRadiusM[envelope.longTermBeamRadiusM.length - 1]!)} at the receiver.` : ''}`}
         data={tables.envelope}
         testId="chart-beam"
       >

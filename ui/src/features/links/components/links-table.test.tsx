@@ -41,3 +41,43 @@ describe('links table: changed since approval and archived links', () => {
     expect(within(archivedRow).queryByText('Changed since approval')).not.toBeInTheDocument();
   });
 });
+
+describe('links table: signed-off links below the required margin with the current engine', () => {
+  it('flags such a link with a word, an icon and its figures, and leaves the others unflagged', async () => {
+    const thin = summary({
+      id: '33333333-3333-4333-8333-333333333333',
+      name: 'Harbour crane hop',
+      status: 'approved',
+      linkMarginDb: 4.5,
+      currentEngine: { linkCoreVersion: '0.2.0', linkMarginDb: 2.387, receivedPowerDbm: -33.6, marginChangeDb: -2.113, belowRequiredMargin: true },
+    });
+    const comfortable = summary({
+      id: '44444444-4444-4444-8444-444444444444',
+      name: 'Ridge relay',
+      status: 'installed',
+      currentEngine: { linkCoreVersion: '0.2.0', linkMarginDb: 12.3, receivedPowerDbm: -23.7, marginChangeDb: 0.1, belowRequiredMargin: false },
+    });
+    // a draft is not signed off: its figures are the engineer's to fix, not a flag of the list
+    const draft = summary({
+      id: '55555555-5555-4555-8555-555555555555',
+      name: 'Draft over the bay',
+      status: 'draft',
+      currentEngine: { linkCoreVersion: '0.2.0', linkMarginDb: 1.2, receivedPowerDbm: -34.8, marginChangeDb: -3, belowRequiredMargin: true },
+    });
+    mockApi([
+      { path: '/auth/me', body: demoEngineer },
+      { path: '/links', body: { items: [thin, comfortable, draft], page: 1, pageSize: 20, total: 3 } },
+    ]);
+    renderApp('/links');
+    const table = await screen.findByTestId('links-table');
+    const rows = within(table).getAllByRole('row');
+    const flag = within(rows[1]!).getByTestId('engine-margin-flag');
+    expect(flag).toHaveTextContent('Below margin with engine 0.2.0');
+    expect(flag.querySelector('svg')).not.toBeNull(); // the icon beside the word
+    expect(within(rows[1]!).getByTestId('engine-margin-figures')).toHaveTextContent(
+      'Stored 4.50 dB; engine 0.2.0 gives 2.39 dB (−2.11 dB), under the required 3 dB.',
+    );
+    expect(within(rows[2]!).queryByTestId('engine-margin-flag')).not.toBeInTheDocument();
+    expect(within(rows[3]!).queryByTestId('engine-margin-flag')).not.toBeInTheDocument();
+  });
+});

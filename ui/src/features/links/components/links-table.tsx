@@ -21,7 +21,7 @@ import { paths } from '@/config/paths';
 import { formatDateTime, formatDistance, formatRelativeTime, formatWavelength } from '@/lib/format';
 import { MarginBadge } from '@/components/ui/margin-verdict';
 import { LinkStatusBadge } from '@/features/links/components/link-status-badge';
-import { LinkFlags } from '@/features/links/components/link-flags';
+import { EngineMarginFlag, LinkFlags } from '@/features/links/components/link-flags';
 import type { LinkSummary } from '@beamwright/link-core/contracts';
 import type { LinkSortField } from '@/features/links/api/get-links';
 
@@ -84,6 +84,7 @@ export function LinksTable({ links, sort, onSortChange }: LinksTableProps) {
           <span className={styles.status}>
             <LinkStatusBadge status={link.status} />
             <LinkFlags link={link} />
+            <EngineMarginFlag link={link} />
           </span>
         ),
       }),
