@@ -199,8 +199,8 @@ export const ATMOSPHERE_MODEL_LABELS: Record<string, string> = {
 
 /** The budget's turbulence models, with the one line the workspace shows beside the choice. */
 export const TURBULENCE_MODEL_LABELS: Record<string, string> = {
-  'gaussian-beam': 'Gaussian beam (launched beam: spread, wander, beam-wave fades)',
-  'spherical-wave': 'Spherical wave (earlier model: no spread term)',
+  'gaussian-beam': 'Gaussian beam',
+  'spherical-wave': 'Spherical wave (earlier model)',
 };
 
 export const VISIBILITY_DEFINITION_LABELS: Record<string, string> = {

@@ -220,7 +220,7 @@ function DesignFormView({ draft, errors, changedFieldIds, onTextChange, onUpdate
               ))}
             </Select>
           </Field>
-          <Field label="Scintillation fade margin" hint="Gamma-gamma fade margin, spherical wave, aperture averaged.">
+          <Field label="Scintillation fade margin" hint="Gamma-gamma fade margin of the chosen turbulence model, aperture averaged.">
             <Switch
               checked={draft.scintillationInclude}
               onChange={(_, data) => onUpdate({ scintillationInclude: data.checked })}
