@@ -7,7 +7,7 @@
 import { alNaboulsiFogExtinctionPerKm } from '../atmosphere/fog-and-precipitation.js';
 import { VISIBILITY_2_PERCENT_PER_MOR, visibility2PercentForAttenuationKm, visibilityExtinctionPerKmFast } from '../atmosphere/visibility-attenuation.js';
 import { launchBeamRadiusAtRangeM } from '../beam/launch.js';
-import { logMeanAnnularCapture } from '../capture/capture.js';
+import { annularCaptureFractionStable, logMeanAnnularCapture } from '../capture/capture.js';
 import { exactOutagePointingLossAtRadiusDb, ricianOutageRadius } from '../pointing/exact-pointing.js';
 import { LINK_DESIGN_DEFAULTS, type AtmosphereModel, type LinkDesignInput } from '../schemas/link-design.schema.js';
 import { apertureAveragedFadeMarginDb, apertureAveragedScintillationIndexFast } from '../turbulence/scintillation.js';
@@ -213,16 +213,12 @@ export function centredGeometricLossDb(beamRadiusM: number, apertureRadiusM: num
   const inverseSquare = 2 / (beamRadiusM * beamRadiusM);
   const openFraction = -Math.expm1(-inverseSquare * (apertureRadiusM - obscurationRadiusM) * (apertureRadiusM + obscurationRadiusM));
   if (obscurationRadiusM === 0) {
-    lastCaptureFraction = openFraction;
     return -10 * Math.log10(openFraction) + 0; // + 0: no −0 when the whole beam is captured
   }
   const shadowExponent = inverseSquare * obscurationRadiusM * obscurationRadiusM;
-  lastCaptureFraction = Math.exp(-shadowExponent) * openFraction;
   return DB_PER_NEPER_POWER * shadowExponent - 10 * Math.log10(openFraction);
 }
 
-// Captured fraction of the last centredGeometricLossDb call (kept beside the loss to avoid a pow).
-let lastCaptureFraction = 0;
 
 /** Numbers of one evaluation of the chain (all losses positive, in dB). */
 export interface ChainResult {
@@ -277,7 +273,7 @@ export function evaluateChain(design: ResolvedDesign, rangeM: number, attenuatio
   const beamRadiusM = launchBeamRadiusAtRangeM(design.wavelengthM, design.apertureBeamRadiusM, design.halfAngleDivergenceRad, design.m2, rangeM);
   const apertureRadiusM = design.apertureDiameterM / 2;
   const geometricLossDb = centredGeometricLossDb(beamRadiusM, apertureRadiusM, apertureRadiusM * design.obscurationRatio);
-  const captureFraction = lastCaptureFraction;
+  const captureFraction = annularCaptureFractionStable(beamRadiusM, apertureRadiusM, apertureRadiusM * design.obscurationRatio);
   const atmosphericLossDb = (attenuationDbPerKm * rangeM) / 1000;
   const obscurationRadiusM = apertureRadiusM * design.obscurationRatio;
   const jitterM = design.jitterSigmaPerAxisRad * rangeM;

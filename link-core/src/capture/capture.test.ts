@@ -2,6 +2,8 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import {
   annularCaptureFraction,
+  annularCaptureFractionStable,
+  centredCaptureFraction,
   captureFraction,
   faridHranilovicCaptureFraction,
   fieldOfViewCheck,
@@ -166,5 +168,16 @@ describe('the small-receiver form bounds the exact offset loss', () => {
         },
       ),
     );
+  });
+});
+
+describe('annularCaptureFractionStable', () => {
+  it('equals the plain difference where nothing cancels, and keeps its digits under a large obscuration', () => {
+    expect(annularCaptureFractionStable(1, 0.8, 0.3)).toBeCloseTo(annularCaptureFraction(1, 0.8, 0.3), 15);
+    expect(annularCaptureFractionStable(1, 0.8, 0)).toBe(centredCaptureFraction(1, 0.8));
+    // a 1 mm beam behind a 10 mm obscuration: exp(−200)·(1 − exp(−2·(0.011² − 0.01²)/1e-6)), derived
+    const exact = Math.exp(-200) * -Math.expm1(-42);
+    expect(annularCaptureFractionStable(1e-3, 0.011, 0.01) / exact).toBeCloseTo(1, 12);
+    expect(annularCaptureFraction(1e-3, 0.011, 0.01)).toBe(0); // the difference underflows to nothing
   });
 });

@@ -40,6 +40,17 @@ export function annularCaptureFraction(beamRadiusM: number, apertureRadiusM: num
 }
 
 /**
+ * The same centred annular fraction written as exp(−2b²/w²)·(1 − exp(−2(a² − b²)/w²)): no
+ * cancellation where the obscuration is about the size of the beam or larger, which the plain
+ * difference of {@link annularCaptureFraction} suffers. Units and ranges as there.
+ */
+export function annularCaptureFractionStable(beamRadiusM: number, apertureRadiusM: number, obscurationRadiusM: number): number {
+  const inverseSquare = 2 / (beamRadiusM * beamRadiusM);
+  const openFraction = -Math.expm1(-inverseSquare * (apertureRadiusM - obscurationRadiusM) * (apertureRadiusM + obscurationRadiusM));
+  return obscurationRadiusM === 0 ? openFraction : Math.exp(-inverseSquare * obscurationRadiusM * obscurationRadiusM) * openFraction;
+}
+
+/**
  * Exact fraction of a Gaussian beam captured by a circular aperture whose centre is offset by r0
  * from the beam axis: η = 1 − Q1(2r0/w, 2a/w) = F_χ'²(4a²/w²; 2, 4r0²/w²). Plain-number form.
  *
