@@ -5,19 +5,12 @@
  * illustrations, not measured links.
  */
 import { pathToFileURL } from 'node:url';
-import { evaluateLink } from '@beamwright/link-core';
+import { evaluateLink, workedExampleDesign } from '@beamwright/link-core';
 
 const older = await import(pathToFileURL(process.argv[2]).href);
 
-const base = (over) => ({
-  rangeM: 2000,
-  transmitter: { wavelengthM: 1.55e-6, powerDbm: 20, waistRadiusM: 0.025, halfAngleDivergenceRad: 1e-3, opticsLossDb: 1 },
-  receiver: { apertureDiameterM: 0.1, sensitivityDbm: -36, opticsLossDb: 1.5 },
-  pointing: { jitterSigmaPerAxisRad: 50e-6, staticErrorRad: 100e-6 },
-  atmosphere: { model: 'kim', visibilityM: 5000, cn2: 5e-14 },
-  scintillation: { include: true, probability: 1e-3 },
-  ...over,
-});
+// every design starts from the repository's one worked example (LB-01, METHODS.md §10.1)
+const base = (over) => ({ ...workedExampleDesign(), ...over });
 const narrow = (rangeM, waistRadiusM, cn2, extra = {}) =>
   base({
     rangeM,
