@@ -13,7 +13,8 @@ import { EditorNotices } from '@/features/link-design/components/editor-notices'
 import { SaveRevisionDialog } from '@/features/link-design/components/save-revision-dialog';
 import { RevisionConflictDialog } from '@/features/link-design/components/revision-conflict-dialog';
 import { LeaveUnsavedDialog } from '@/features/link-design/components/leave-unsaved-dialog';
-import { applyReceiverSpec, applyTransmitterSpec, draftFromDesign } from '@/features/link-design/design-draft';
+import { draftFromDesign } from '@/features/link-design/design-draft';
+import { applyReceiverSpec, applyTransmitterSpec } from '@/features/link-design/catalogue-fill';
 import { diffDesigns } from '@/features/link-design/design-diff';
 import { EquipmentPicker } from '@/features/equipment/components/equipment-picker';
 import { SitePathSummary } from '@/features/sites/components/site-path-summary';

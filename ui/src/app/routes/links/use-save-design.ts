@@ -5,7 +5,7 @@ import { apiFieldIssues, mapIssuesToFields } from '@/lib/form-errors';
 import { linkKeys } from '@/lib/query-keys';
 import { getLinkQueryOptions } from '@/features/links/api/get-link';
 import { readRevisionConflict, useSaveRevision } from '@/features/links/api/save-revision';
-import { rebaseDraft } from '@/features/link-design/design-draft';
+import { rebaseDraft } from '@/features/link-design/design-rebase';
 import { designFieldLabel, diffDesigns } from '@/features/link-design/design-diff';
 import type { DesignWorkspace } from '@/features/link-design/hooks/use-design-workspace';
 import type { RebaseNotice } from '@/features/link-design/hooks/use-draft-persistence';

@@ -25,16 +25,10 @@ import {
 import { LazyEChart } from '@/components/charts/lazy-echart';
 import { useThemeMode } from '@/lib/theme';
 import { formatDistance, formatLength } from '@/lib/format';
-import {
-  beamEnvelopeData,
-  beamEnvelopeOption,
-  marginVsRangeData,
-  marginVsRangeOption,
-  marginVsVisibilityData,
-  marginVsVisibilityOption,
-  waterfallOption,
-  type ChartData,
-} from '@/features/link-design/charts/chart-options';
+import type { ChartData } from '@/features/link-design/charts/chart-format';
+import { waterfallOption } from '@/features/link-design/charts/waterfall-chart';
+import { beamEnvelopeData, beamEnvelopeOption } from '@/features/link-design/charts/beam-envelope-chart';
+import { marginVsRangeData, marginVsRangeOption, marginVsVisibilityData, marginVsVisibilityOption } from '@/features/link-design/charts/margin-charts';
 import { VISIBILITY_BANDS } from '@/features/link-design/charts/visibility-bands';
 
 const useStyles = makeStyles({
