@@ -1,6 +1,7 @@
 import { useState, type ReactNode } from 'react';
 import { Body1, Button, makeStyles, tokens, useRestoreFocusTarget } from '@fluentui/react-components';
 import { ArrowUndoRegular, SaveRegular } from '@fluentui/react-icons';
+import { REQUIRED_LINK_MARGIN_DB } from '@beamwright/link-core';
 import type { LinkDetail } from '@beamwright/link-core/contracts';
 import { LinkHeader } from '@/features/links/components/link-header';
 import { useDesignWorkspace } from '@/features/link-design/hooks/use-design-workspace';
@@ -20,6 +21,8 @@ import { EquipmentPicker } from '@/features/equipment/components/equipment-picke
 import { SitePathSummary } from '@/features/sites/components/site-path-summary';
 import { useWorkspaceStyles } from '@/app/routes/links/workspace-layout';
 import { useSaveDesign } from '@/app/routes/links/use-save-design';
+import { ResultsTabs } from '@/app/routes/links/results-tabs';
+import { MarginExplorer } from '@/features/explore/components/margin-explorer';
 
 const useStyles = makeStyles({
   statusBar: { display: 'flex', alignItems: 'center', columnGap: tokens.spacingHorizontalM, marginBottom: tokens.spacingVerticalM, minHeight: '32px' },
@@ -136,13 +139,18 @@ export function DesignEditor({ link, historyAction }: { link: LinkDetail; histor
           receiverExtras={<EquipmentPicker kind="receiver" onPick={(item) => item.kind === 'receiver' && workspace.replaceDraft(applyReceiverSpec(workspace.draft, item.spec))} />}
         />
         <div className={layout.results}>
-          <DesignResults
-            design={workspace.shownDesign}
-            budget={workspace.budget}
-            budgetError={workspace.budgetError}
-            chartDesign={workspace.chartDesign}
-            stale={workspace.showingLastValid}
-            onUseOutagePointing={() => workspace.setText('pointing.outageProbability', '0.001')}
+          <ResultsTabs
+            budget={
+              <DesignResults
+                design={workspace.shownDesign}
+                budget={workspace.budget}
+                budgetError={workspace.budgetError}
+                chartDesign={workspace.chartDesign}
+                stale={workspace.showingLastValid}
+                onUseOutagePointing={() => workspace.setText('pointing.outageProbability', '0.001')}
+              />
+            }
+            explore={<MarginExplorer design={workspace.chartDesign} requiredMarginDb={REQUIRED_LINK_MARGIN_DB} />}
           />
         </div>
       </div>

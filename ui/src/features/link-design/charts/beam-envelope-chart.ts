@@ -4,7 +4,7 @@ import type { BeamEnvelope } from '@beamwright/link-core';
 import type { ChartOption } from '@/components/charts/echart';
 import { CHART_TEXT, axisStyle, type ChartMode } from '@/components/charts/chart-theme';
 import { beamPalette } from '@/lib/theme';
-import { distanceAxis, niceLimit, type ChartData } from '@/features/link-design/charts/chart-format';
+import { distanceAxis, niceLimit, type ChartData } from '@/components/charts/chart-format';
 
 /** Legend name of the long-term (turbulence-spread) radius series. */
 export const LONG_TERM_RADIUS_NAME = 'Long-term radius (turbulence)';

@@ -4,7 +4,7 @@ import type { RangeSweep, VisibilitySweep } from '@beamwright/link-core';
 import type { ChartOption } from '@/components/charts/echart';
 import { CHART_TEXT, axisStyle, type ChartMode } from '@/components/charts/chart-theme';
 import { beamPalette } from '@/lib/theme';
-import { distanceAxis, marginWord, round, type ChartData } from '@/features/link-design/charts/chart-format';
+import { distanceAxis, marginWord, round, type ChartData } from '@/components/charts/chart-format';
 
 /** Margin against path length as plotted: path length in km (or m), margin in dB. */
 export function marginVsRangePoints(sweep: RangeSweep) {

@@ -4,7 +4,7 @@ import type { LinkBudget } from '@beamwright/link-core';
 import type { ChartOption } from '@/components/charts/echart';
 import { CHART_TEXT, axisStyle, type ChartMode } from '@/components/charts/chart-theme';
 import { beamPalette } from '@/lib/theme';
-import { round } from '@/features/link-design/charts/chart-format';
+import { round } from '@/components/charts/chart-format';
 
 const SHORT_TERM_NAMES: Record<string, string> = {
   transmitPower: 'Tx power',
