@@ -270,6 +270,22 @@ describe('variants of a revision and their promotion (e2e)', () => {
     expect(await revisionNumbers(link.id)).toEqual([1, 2]);
   });
 
+  it('answers 422 naming the stored field when a stored design no longer passes the design checks, and saves nothing', async () => {
+    const link = await linkWithWavelengthSet('Stored design refused');
+    // a row as a looser schema of the past might have accepted it (test set-up only)
+    await app
+      .get(DataSource)
+      .query(
+        `UPDATE link_revision_variant v SET design = jsonb_set(v.design, '{rangeM}', '-5') FROM link_revision r WHERE r.id = v.revision_id AND r.link_id = $1 AND v.position = 2`,
+        [link.id],
+      );
+    const refused = await http().post(`/api/links/${link.id}/revisions/2/variants/0/promote`).set(...engineer()).send({}).expect(422);
+    const body = ErrorBodySchema.parse(refused.body);
+    expect(body.issues).toEqual([{ path: 'variants.2.design.rangeM', message: expect.stringMatching(/greater than|at least/) }]);
+    expect(body.message).toMatch(/revision 2 no longer passes the design checks .*nothing was saved/);
+    expect(await revisionNumbers(link.id)).toEqual([1, 2]);
+  });
+
   it("reads a variant an older engine stored with its own budget, and promotes its design as that engine meant it", async () => {
     const link = await linkWithWavelengthSet('Older engine variant');
     // The variant row as engine 0.1.0 would have stored it: its own margin, no turbulence model in
