@@ -140,3 +140,10 @@ export { workedExampleDesign } from './examples/worked-example.js';
 
 // A seeded uniform generator for Monte-Carlo checks and benchmarks (no unseeded randomness)
 export { seededUniform } from './numeric/seeded-random.js';
+
+// ---------------------------------------------------------------------------------------------
+// Design solvers, wavelength comparison and sweep samplers (METHODS.md §15), with the bracketed
+// minimiser they refine peaks with (§12.6). Kept in one block at the end of the entry.
+// ---------------------------------------------------------------------------------------------
+export { minimiseBrent } from './numeric/minimisation.js';
+export type { MinimisationOptions, Minimum } from './numeric/minimisation.js';
