@@ -147,3 +147,7 @@ export { seededUniform } from './numeric/seeded-random.js';
 // ---------------------------------------------------------------------------------------------
 export { minimiseBrent } from './numeric/minimisation.js';
 export type { MinimisationOptions, Minimum } from './numeric/minimisation.js';
+export { VARIABLE_DESIGN_FIELDS, VARIABLE_DESIGN_FIELD_UNITS, designFieldRange, designValueOf, withDesignValue, InvalidInputError } from './budget/design-fields.js';
+export type { VariableDesignField, DesignFieldRange } from './budget/design-fields.js';
+export { solveDesign, SolveDesignOptionsSchema, SOLVE_DESIGN_VARIABLES, SOLVE_DESIGN_FIELDS } from './budget/solve-design.js';
+export type { SolveDesignOptions, SolveDesignResult, SolveDesignVariable } from './budget/solve-design.js';
