@@ -151,3 +151,5 @@ export { VARIABLE_DESIGN_FIELDS, VARIABLE_DESIGN_FIELD_UNITS, designFieldRange, 
 export type { VariableDesignField, DesignFieldRange } from './budget/design-fields.js';
 export { solveDesign, SolveDesignOptionsSchema, SOLVE_DESIGN_VARIABLES, SOLVE_DESIGN_FIELDS } from './budget/solve-design.js';
 export type { SolveDesignOptions, SolveDesignResult, SolveDesignVariable } from './budget/solve-design.js';
+export { compareWavelengths, referenceWeather, CompareWavelengthsOptionsSchema, USUAL_FSO_WAVELENGTHS_M, MAX_COMPARED_WAVELENGTHS, REFERENCE_WEATHER_CLASSES } from './budget/wavelength-comparison.js';
+export type { CompareWavelengthsOptions, ReferenceWeather, ReferenceWeatherClass, WavelengthComparison, WavelengthComparisonRow } from './budget/wavelength-comparison.js';
