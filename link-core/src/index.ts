@@ -153,3 +153,5 @@ export { solveDesign, SolveDesignOptionsSchema, SOLVE_DESIGN_VARIABLES, SOLVE_DE
 export type { SolveDesignOptions, SolveDesignResult, SolveDesignVariable } from './budget/solve-design.js';
 export { compareWavelengths, referenceWeather, CompareWavelengthsOptionsSchema, USUAL_FSO_WAVELENGTHS_M, MAX_COMPARED_WAVELENGTHS, REFERENCE_WEATHER_CLASSES } from './budget/wavelength-comparison.js';
 export type { CompareWavelengthsOptions, ReferenceWeather, ReferenceWeatherClass, WavelengthComparison, WavelengthComparisonRow } from './budget/wavelength-comparison.js';
+export { marginSweep, marginGrid, sweepAxisValues, SweepAxisSchema, SWEEP_SPACINGS, MAX_SWEEP_POINTS, MAX_GRID_POINTS } from './budget/sweeps.js';
+export type { SweepAxis, SweepAxisValues, SweepSpacing, MarginSweep, MarginGrid } from './budget/sweeps.js';
