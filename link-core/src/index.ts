@@ -112,3 +112,15 @@ export { workedExampleDesign } from './examples/worked-example.js';
 
 // A seeded uniform generator for Monte-Carlo checks and benchmarks (no unseeded randomness)
 export { seededUniform } from './numeric/seeded-random.js';
+
+// ---------------------------------------------------------------------------------------------
+// Design solvers, wavelength comparison and sweep samplers (METHODS.md §15).
+// ---------------------------------------------------------------------------------------------
+export { VARIABLE_DESIGN_FIELDS, VARIABLE_DESIGN_FIELD_UNITS, designFieldRange, designValueOf, withDesignValue, InvalidInputError } from './budget/design-fields.js';
+export type { VariableDesignField, DesignFieldRange } from './budget/design-fields.js';
+export { solveDesign, SolveDesignOptionsSchema, SOLVE_DESIGN_VARIABLES, SOLVE_DESIGN_FIELDS } from './budget/solve-design.js';
+export type { SolveDesignOptions, SolveDesignResult, SolveDesignVariable } from './budget/solve-design.js';
+export { compareWavelengths, referenceWeather, CompareWavelengthsOptionsSchema, USUAL_FSO_WAVELENGTHS_M, MAX_COMPARED_WAVELENGTHS, REFERENCE_WEATHER_CLASSES } from './budget/wavelength-comparison.js';
+export type { CompareWavelengthsOptions, ReferenceWeather, ReferenceWeatherClass, WavelengthComparison, WavelengthComparisonRow } from './budget/wavelength-comparison.js';
+export { marginSweep, marginGrid, sweepAxisValues, SweepAxisSchema, SWEEP_SPACINGS, MAX_SWEEP_POINTS, MAX_GRID_POINTS } from './budget/sweeps.js';
+export type { SweepAxis, SweepAxisValues, SweepSpacing, MarginSweep, MarginGrid } from './budget/sweeps.js';
