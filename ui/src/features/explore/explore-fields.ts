@@ -1,7 +1,7 @@
 // The design inputs a sweep or a heat map can run along, with the unit each is shown in and a
 // sensible default span around the design's own value. The engine works in SI; these are display
 // units only (the factor converts a displayed number to the field's SI value).
-import type { LinkDesignInput } from '@beamwright/link-core';
+import type { LinkDesignInput, VariableDesignField } from '@beamwright/link-core';
 
 export const EXPLORE_FIELD_IDS = [
   'rangeM',
@@ -12,7 +12,7 @@ export const EXPLORE_FIELD_IDS = [
   'atmosphere.cn2',
   'transmitter.powerDbm',
   'receiver.apertureDiameterM',
-] as const;
+] as const satisfies readonly VariableDesignField[];
 export type ExploreFieldId = (typeof EXPLORE_FIELD_IDS)[number];
 
 export interface ExploreField {

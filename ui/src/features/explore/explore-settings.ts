@@ -1,7 +1,7 @@
 // What the explorer is asked to plot: one input (a line) or two (a heat map), each with its span,
 // number of samples and spacing, as the form holds them (text) and as the sweep needs them (SI).
 import { z } from 'zod';
-import type { LinkDesignInput } from '@beamwright/link-core';
+import { designFieldRange, type LinkDesignInput } from '@beamwright/link-core';
 import { EXPLORE_FIELDS, EXPLORE_FIELD_IDS, defaultAxisSpan } from '@/features/explore/explore-fields';
 import type { SweepAxis } from '@/features/explore/sweep-compute';
 
@@ -29,6 +29,17 @@ const axisSchema = z
     if (axis.spacing === 'log') {
       if (axis.from <= 0) context.addIssue({ code: 'custom', path: ['from'], message: 'must be above 0 on a logarithmic scale' });
       if (axis.to <= 0) context.addIssue({ code: 'custom', path: ['to'], message: 'must be above 0 on a logarithmic scale' });
+    }
+    // the design schema's own bounds, in the unit the form shows
+    const { lower, upper, lowerExclusive } = designFieldRange(axis.field);
+    const factor = EXPLORE_FIELDS[axis.field].factor;
+    const unit = EXPLORE_FIELDS[axis.field].unit;
+    const shown = (value: number) => `${Number((value / factor).toPrecision(4))} ${unit}`;
+    for (const end of ['from', 'to'] as const) {
+      if (axis.spacing === 'log' && axis[end] <= 0) continue; // already said above
+      const si = axis[end] * factor;
+      if (si > upper) context.addIssue({ code: 'custom', path: [end], message: `must be at most ${shown(upper)}` });
+      else if (lowerExclusive ? si <= lower : si < lower) context.addIssue({ code: 'custom', path: [end], message: `must be ${lowerExclusive ? 'above' : 'at least'} ${shown(lower)}` });
     }
   });
 
