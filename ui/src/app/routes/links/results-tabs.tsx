@@ -1,18 +1,25 @@
-import { useState, type ReactNode } from 'react';
+import { useState, type JSX, type ReactNode } from 'react';
 import { Tab, TabList, makeStyles, tokens } from '@fluentui/react-components';
-import { CalculatorRegular, DataAreaRegular } from '@fluentui/react-icons';
+import { BranchForkRegular, CalculatorRegular, DataAreaRegular } from '@fluentui/react-icons';
 
 const useStyles = makeStyles({
   root: { display: 'grid', rowGap: tokens.spacingVerticalM, minWidth: 0 },
 });
 
-export type ResultsView = 'budget' | 'explore';
+export type ResultsView = 'budget' | 'explore' | 'alternatives';
+
+const VIEWS: { value: ResultsView; label: string; icon: JSX.Element }[] = [
+  { value: 'budget', label: 'Budget', icon: <CalculatorRegular /> },
+  { value: 'explore', label: 'Explore', icon: <DataAreaRegular /> },
+  { value: 'alternatives', label: 'Alternatives', icon: <BranchForkRegular /> },
+];
 
 /**
- * The workspace's right-hand column: the budget of the design, or the margin explorer. A view once
- * opened stays mounted (hidden) so its settings and its last chart survive a switch.
+ * The workspace's right-hand column: the budget of the design, the margin explorer, or the design's
+ * alternatives side by side. A view once opened stays mounted (hidden), so its settings and its last
+ * chart survive a switch.
  */
-export function ResultsTabs({ budget, explore }: { budget: ReactNode; explore: ReactNode }) {
+export function ResultsTabs({ views, alternativesCount }: { views: Record<ResultsView, ReactNode>; alternativesCount?: number }) {
   const styles = useStyles();
   const [view, setView] = useState<ResultsView>('budget');
   const [opened, setOpened] = useState<ReadonlySet<ResultsView>>(new Set(['budget']));
@@ -23,19 +30,18 @@ export function ResultsTabs({ budget, explore }: { budget: ReactNode; explore: R
   return (
     <div className={styles.root}>
       <TabList selectedValue={view} onTabSelect={(_, data) => select(data.value as ResultsView)} aria-label="Results">
-        <Tab value="budget" icon={<CalculatorRegular />} id="results-tab-budget" aria-controls="results-panel-budget">
-          Budget
-        </Tab>
-        <Tab value="explore" icon={<DataAreaRegular />} id="results-tab-explore" aria-controls="results-panel-explore" data-testid="results-tab-explore">
-          Explore
-        </Tab>
+        {VIEWS.map(({ value, label, icon }) => (
+          <Tab key={value} value={value} icon={icon} id={`results-tab-${value}`} aria-controls={`results-panel-${value}`} data-testid={`results-tab-${value}`}>
+            {label}
+            {value === 'alternatives' && alternativesCount ? ` (${alternativesCount})` : ''}
+          </Tab>
+        ))}
       </TabList>
-      <div role="tabpanel" id="results-panel-budget" aria-labelledby="results-tab-budget" hidden={view !== 'budget'}>
-        {budget}
-      </div>
-      <div role="tabpanel" id="results-panel-explore" aria-labelledby="results-tab-explore" hidden={view !== 'explore'}>
-        {opened.has('explore') && explore}
-      </div>
+      {VIEWS.map(({ value }) => (
+        <div key={value} role="tabpanel" id={`results-panel-${value}`} aria-labelledby={`results-tab-${value}`} hidden={view !== value}>
+          {opened.has(value) && views[value]}
+        </div>
+      ))}
     </div>
   );
 }
