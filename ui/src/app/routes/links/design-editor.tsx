@@ -22,6 +22,7 @@ import { SitePathSummary } from '@/features/sites/components/site-path-summary';
 import { useWorkspaceStyles } from '@/app/routes/links/workspace-layout';
 import { useSaveDesign } from '@/app/routes/links/use-save-design';
 import { ResultsTabs } from '@/app/routes/links/results-tabs';
+import { sizingActions } from '@/app/routes/links/sizing-actions';
 import { MarginExplorer } from '@/features/explore/components/margin-explorer';
 import { AlternativesPanel } from '@/features/variants/components/alternatives-panel';
 import { useVariantSet, type VariantDraft } from '@/features/variants/hooks/use-variant-set';
@@ -170,6 +171,7 @@ export function DesignEditor({ link, historyAction }: { link: LinkDetail; histor
             diffractionHalfAngleRad: workspace.budget?.diffractionHalfAngleRad,
           }}
           powerNote={<EyeSafetyLine design={workspace.shownDesign} budget={workspace.budget} />}
+          fieldActions={sizingActions(workspace)}
           pathExtras={
             <SitePathSummary
               siteAId={link.siteA?.id}
