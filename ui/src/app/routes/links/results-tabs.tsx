@@ -4,6 +4,8 @@ import { BranchForkRegular, CalculatorRegular, DataAreaRegular } from '@fluentui
 
 const useStyles = makeStyles({
   root: { display: 'grid', rowGap: tokens.spacingVerticalM, minWidth: 0 },
+  // at 320 px the three tabs wrap instead of pushing the page sideways
+  tabs: { flexWrap: 'wrap' },
 });
 
 export type ResultsView = 'budget' | 'explore' | 'alternatives';
@@ -29,7 +31,7 @@ export function ResultsTabs({ views, alternativesCount }: { views: Record<Result
   };
   return (
     <div className={styles.root}>
-      <TabList selectedValue={view} onTabSelect={(_, data) => select(data.value as ResultsView)} aria-label="Results">
+      <TabList className={styles.tabs} selectedValue={view} onTabSelect={(_, data) => select(data.value as ResultsView)} aria-label="Results">
         {VIEWS.map(({ value, label, icon }) => (
           <Tab key={value} value={value} icon={icon} id={`results-tab-${value}`} aria-controls={`results-panel-${value}`} data-testid={`results-tab-${value}`}>
             {label}

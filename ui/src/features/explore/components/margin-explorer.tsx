@@ -223,7 +223,7 @@ export function MarginExplorer({ design, requiredMarginDb }: MarginExplorerProps
       </div>
 
       {shown && (
-        <div data-testid="explore-result" data-kind={shown.kind} data-count={shown.count} data-computing={sweep.computing ? 'true' : 'false'}>
+        <div data-testid="explore-result" data-kind={shown.kind} data-count={shown.count} data-computing={sweep.computing ? 'true' : 'false'} data-serial={sweep.serial}>
           <ChartCard
             title={title}
             caption={

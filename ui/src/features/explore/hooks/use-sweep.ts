@@ -18,6 +18,8 @@ export interface SweepState {
   resultRequest: SweepRequest | null;
   computing: boolean;
   error: string | null;
+  /** counts the results shown (a browser test times a redraw by it) */
+  serial: number;
 }
 
 type Runner = (request: SweepRequest) => Promise<SweepResult>;
@@ -42,7 +44,7 @@ function createRunner(): { run: Runner; dispose: () => void } {
 }
 
 export function useSweep(request: SweepRequest | null): SweepState {
-  const [state, setState] = useState<SweepState>({ result: null, resultRequest: null, computing: false, error: null });
+  const [state, setState] = useState<SweepState>({ result: null, resultRequest: null, computing: false, error: null, serial: 0 });
   const runner = useRef<{ run: Runner; dispose: () => void } | null>(null);
   const inFlight = useRef(false);
   const waiting = useRef<SweepRequest | null>(null);
@@ -59,7 +61,7 @@ export function useSweep(request: SweepRequest | null): SweepState {
     active
       .run(next)
       .then((result) => {
-        if (runner.current === active) setState({ result, resultRequest: next, computing: waiting.current !== null, error: null });
+        if (runner.current === active) setState((previous) => ({ result, resultRequest: next, computing: waiting.current !== null, error: null, serial: previous.serial + 1 }));
       })
       .catch((error: unknown) => {
         if (runner.current === active) setState((previous) => ({ ...previous, computing: false, error: error instanceof Error ? error.message : String(error) }));
