@@ -10,6 +10,7 @@ import { numberField, textField } from './common.contract.js';
 /** Units a path length is typed and shown in by default: metres, kilometres, statute miles. */
 export const DISTANCE_UNITS = ['m', 'km', 'mi'] as const;
 export type DistanceUnit = (typeof DISTANCE_UNITS)[number];
+export type VisibilityDefinitionName = (typeof VISIBILITY_DEFINITIONS)[number];
 
 /** What a new organisation starts with: the engine's own defaults, so nothing changes until an admin says so. */
 export const ORGANISATION_DEFAULTS = {
