@@ -121,8 +121,8 @@ export function sitePlanOption(plan: SitePlan, mode: ChartMode, sidePx: number, 
   const verdicts = (['adequate', 'thin', 'fails'] as const).filter((verdict) => plan.links.some((link) => link.verdict === verdict));
   return {
     grid: { left: 'center', top: SITE_PLAN_MARGIN_PX.top, width: sidePx, height: sidePx },
-    xAxis: axis('East (m)'),
-    yAxis: axis('North (m)'),
+    xAxis: axis('East'),
+    yAxis: axis('North'),
     legend: { top: 0, textStyle: { color: colours.text }, data: verdicts.map((verdict) => MARGIN_VERDICT_TEXT[verdict]) },
     tooltip: { trigger: 'item', confine: true },
     series: [
