@@ -280,6 +280,68 @@ describe('accessibility of every screen and dialog, light and dark (axe-core)', 
     await dialog.waitFor({ state: 'detached' });
   });
 
+  it('the sites, a site with a field error, the site plan at 320 px, and the settings (admin)', async () => {
+    const { page, context } = browser;
+    const signInAs = async (email) => {
+      await page.getByRole('button', { name: 'Sign out' }).click();
+      await page.getByRole('heading', { name: 'Sign in' }).waitFor();
+      await context.clearCookies();
+      await signIn(page, email);
+      await page.getByTestId('links-table').waitFor();
+    };
+    await signInAs('engineer@demo.test');
+    await page.goto(`${BASE_URL}/sites`);
+    await page.getByTestId('sites-table').waitFor();
+    await page.getByTestId('site-plan-chart').locator('svg').first().waitFor();
+    const planLinks = page.getByTestId('site-plan-links');
+    assert.ok((await planLinks.locator('tbody tr').count()) > 0, 'the demo links are on the plan');
+    for (const verdict of await planLinks.locator('[data-verdict]').allTextContents()) assert.match(verdict, VERDICT_WORDS, 'each link on the plan says its verdict in words');
+    assert.ok((await page.getByTestId('site-plan-chart').getAttribute('aria-label')).startsWith('Site plan:'), 'the plan has an accessible name');
+    await page.getByRole('button', { name: /Show the values as a table/ }).click();
+    await page.getByTestId('site-plan-table').waitFor();
+    await settle(page);
+    await expectAccessible(page, 'sites and the site plan with its table (engineer)');
+
+    await page.getByTestId('sites-table').getByRole('link').first().click();
+    const latitude = page.getByLabel('Latitude');
+    await latitude.fill('56°61′N');
+    await page.getByRole('button', { name: 'Save site' }).click();
+    await page.getByText(/^Latitude is not an angle/).waitFor();
+    assert.equal(await latitude.getAttribute('aria-invalid'), 'true');
+    const messageId = await page.getByText(/^Latitude is not an angle/).getAttribute('id');
+    assert.ok((await describedByIds(latitude)).includes(messageId), 'the latitude error is tied to its field');
+    await settle(page);
+    await expectAccessible(page, 'site editor with a field error (engineer)');
+
+    await page.goto(`${BASE_URL}/sites/new`);
+    await page.getByLabel('Site name').waitFor();
+    await expectAccessible(page, 'new site (engineer)');
+
+    await page.setViewportSize({ width: 320, height: 800 });
+    try {
+      await page.goto(`${BASE_URL}/sites`);
+      await page.getByTestId('site-plan-chart').locator('svg').first().waitFor();
+      await settle(page);
+      const widths = await page.evaluate(() => ({ scrollWidth: document.scrollingElement.scrollWidth, plan: document.querySelector('[data-testid="site-plan-chart"]').getBoundingClientRect().right }));
+      assert.ok(widths.scrollWidth <= 321, `the sites page scrolls sideways at 320 px (scrollWidth ${widths.scrollWidth})`);
+      assert.ok(widths.plan <= 321, `the site plan fits at 320 px (right ${widths.plan})`);
+      await expectAccessible(page, 'sites at 320 px (engineer)');
+      await screenshot(page, 'accessibility-sites-320px');
+    } finally {
+      await page.setViewportSize({ width: 1440, height: 1000 });
+    }
+
+    await signInAs('admin@demo.test');
+    await page.getByRole('link', { name: 'Settings' }).click();
+    const fade = page.getByLabel('Fade probability');
+    await fade.fill('0.9');
+    await page.getByRole('button', { name: 'Save settings' }).click();
+    await page.getByText(/^Fade probability must be between/).waitFor();
+    assert.equal(await fade.getAttribute('aria-invalid'), 'true');
+    await settle(page);
+    await expectAccessible(page, 'organisation settings with a field error (admin)');
+  });
+
   it('reports no script errors in the page', () => {
     assert.deepEqual(browser.consoleErrors, []);
   });

@@ -39,6 +39,10 @@ export class EquipmentModel {
   @Column({ type: 'jsonb' })
   spec: TransmitterSpec | ReceiverSpec;
 
+  /** set when the model is retired: hidden from the pickers, still readable by id */
+  @Column({ name: 'retired_at', type: 'timestamptz', nullable: true })
+  retiredAt: Date | null;
+
   @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
   createdAt: Date;
 

@@ -2,10 +2,13 @@ import { Body, Controller, Delete, Get, HttpCode, HttpStatus, Param, Patch, Post
 import { ApiBearerAuth, ApiBody, ApiOkResponse, ApiQuery, ApiTags } from '@nestjs/swagger';
 import {
   CreateEquipmentRequestSchema,
+  EquipmentImportRequestSchema,
+  EquipmentImportResultSchema,
   EquipmentListQuerySchema,
   EquipmentListResponseSchema,
   EquipmentResponseSchema,
   UpdateEquipmentRequestSchema,
+  type EquipmentImportResult,
   type EquipmentListResponse,
   type EquipmentResponse,
 } from '@beamwright/link-core/contracts';
@@ -26,12 +29,26 @@ export class EquipmentController {
 
   @Get()
   @ApiQuery({ name: 'kind', required: false, enum: ['transmitter', 'receiver'] })
+  @ApiQuery({ name: 'includeRetired', required: false, enum: ['true', 'false'] })
   @ApiOkResponse({ schema: openApiSchema(EquipmentListResponseSchema, 'output') })
   async list(
     @CurrentUser() caller: AuthUser,
     @Query(new ZodValidationPipe(EquipmentListQuerySchema)) query: z.output<typeof EquipmentListQuerySchema>,
   ): Promise<EquipmentListResponse> {
-    return { items: await this.equipment.list(caller, query.kind) };
+    return { items: await this.equipment.list(caller, query.kind, query.includeRetired === 'true') };
+  }
+
+  /** A catalogue CSV: checked, imported whole, or only its valid rows (see EquipmentImportRequestSchema). */
+  @Post('import')
+  @RolesFor('equipment.write')
+  @HttpCode(HttpStatus.OK)
+  @ApiBody({ schema: openApiSchema(EquipmentImportRequestSchema) })
+  @ApiOkResponse({ schema: openApiSchema(EquipmentImportResultSchema, 'output') })
+  importCsv(
+    @CurrentUser() caller: AuthUser,
+    @Body(new ZodValidationPipe(EquipmentImportRequestSchema)) body: z.output<typeof EquipmentImportRequestSchema>,
+  ): Promise<EquipmentImportResult> {
+    return this.equipment.importCsv(caller, body.csv, body.mode);
   }
 
   @Get(':id')

@@ -8,6 +8,7 @@ export function toEquipmentResponse(model: EquipmentModel): EquipmentResponse {
     maker: model.maker,
     notes: model.notes,
     illustrative: model.illustrative,
+    retiredAt: model.retiredAt ? model.retiredAt.toISOString() : null,
     createdAt: model.createdAt.toISOString(),
     updatedAt: model.updatedAt.toISOString(),
   };

@@ -1,7 +1,7 @@
 import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import { DataSource, In, Repository, type EntityManager } from 'typeorm';
-import type { CreateSiteRequestSchema, SiteResponse, UpdateSiteRequestSchema } from '@beamwright/link-core/contracts';
+import type { CreateSiteRequestSchema, SiteResponse, SiteUserLink, UpdateSiteRequestSchema } from '@beamwright/link-core/contracts';
 import type { z } from 'zod';
 import type { AuthUser } from '../common/auth-user.js';
 import { FOREIGN_KEY_VIOLATION, postgresErrorCode } from '../common/database-errors.js';
@@ -19,6 +19,14 @@ export interface SiteGeometryChange {
 
 /** Called inside the site update's transaction when the site's geometry changed. */
 export type SiteGeometryChangeHandler = (manager: EntityManager, site: Site, changes: SiteGeometryChange[], caller: AuthUser) => Promise<void>;
+
+/** The 409 that names the links still using a site (`SiteInUseBodySchema`). */
+function siteInUse(links: SiteUserLink[]): ConflictException {
+  const names = links.slice(0, 5).map((link) => `“${link.name}”`).join(', ');
+  const more = links.length > 5 ? ` and ${links.length - 5} more` : '';
+  const noun = links.length === 1 ? 'link uses' : `${links.length} links use`;
+  return new ConflictException({ message: `The site cannot be deleted: ${noun} it (${names}${more}). Move ${links.length === 1 ? 'that link' : 'those links'} to another site first.`, links });
+}
 
 @Injectable()
 export class SitesService {
@@ -64,15 +72,32 @@ export class SitesService {
   }
 
   async remove(caller: AuthUser, id: string): Promise<void> {
-    const site = await this.findOwned(caller, id);
-    try {
-      await this.sites.delete({ id: site.id, organisationId: caller.organisationId });
-    } catch (error) {
-      if (postgresErrorCode(error) === FOREIGN_KEY_VIOLATION) {
-        throw new ConflictException('The site is used by a link; move the link to another site first');
+    await this.dataSource.transaction(async (manager) => {
+      const site = await manager.findOne(Site, { where: { id, organisationId: caller.organisationId }, lock: { mode: 'pessimistic_write' } });
+      if (!site) throw new NotFoundException('Site not found');
+      // Checked before the delete so the refusal can name the links; the foreign key stays the
+      // guarantee (a link saved onto the site meanwhile still makes the delete fail below).
+      const users = await this.linksUsing(manager, caller, site.id);
+      if (users.length > 0) throw siteInUse(users);
+      try {
+        await manager.delete(Site, { id: site.id, organisationId: caller.organisationId });
+      } catch (error) {
+        if (postgresErrorCode(error) === FOREIGN_KEY_VIOLATION) throw siteInUse(await this.linksUsing(this.dataSource.manager, caller, site.id));
+        throw error;
       }
-      throw error;
-    }
+    });
+  }
+
+  /**
+   * The links (archived ones too) with the site at either end. The links module depends on this
+   * one, so the query reads the link table directly rather than through its service.
+   */
+  private async linksUsing(manager: EntityManager, caller: AuthUser, siteId: string): Promise<SiteUserLink[]> {
+    const rows = (await manager.query(
+      'SELECT id, name FROM link WHERE organisation_id = $1 AND (site_a_id = $2 OR site_b_id = $2) ORDER BY name, id',
+      [caller.organisationId, siteId],
+    )) as { id: string; name: string }[];
+    return rows.map((row) => ({ id: row.id, name: row.name }));
   }
 
   /** Sites of the caller's organisation by id; used by other modules to check references. */

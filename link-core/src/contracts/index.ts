@@ -9,6 +9,7 @@ export * from './health.contract.js';
 export * from './common.contract.js';
 export * from './sites.contract.js';
 export * from './equipment.contract.js';
+export * from './organisation-settings.contract.js';
 export * from './links.contract.js';
 export * from './variants.contract.js';
 export * from './reviews.contract.js';

@@ -27,6 +27,7 @@ const EXPECTED: Record<PermissionAction, [admin: boolean, engineer: boolean, rev
   'site.write': [true, true, false, false],
   'equipment.write': [true, true, false, false],
   'organisation.manage': [true, false, false, false],
+  'organisation.settings': [true, false, false, false],
 };
 
 describe('workflow rules: who may do what', () => {
@@ -37,6 +38,11 @@ describe('workflow rules: who may do what', () => {
       expect(row, action).toEqual(ROLES.map((role) => EXPECTED[action][['admin', 'engineer', 'reviewer', 'installer'].indexOf(role)]));
     }
     expect(isAllowed(undefined, 'link.create')).toBe(false);
+  });
+
+  it('keeps the organisation settings with the admin alone, and the admin out of the designs', () => {
+    expect(ROLES.filter((role) => isAllowed(role, 'organisation.settings'))).toEqual(['admin']);
+    expect(isAllowed('admin', 'link.revise')).toBe(false);
   });
 
   it('lets exactly the roles that save a revision promote a variant (a promotion saves revision n+1)', () => {

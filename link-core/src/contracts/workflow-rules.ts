@@ -40,6 +40,8 @@ export const PERMISSIONS = {
   'equipment.write': ['engineer', 'admin'],
   /** members, roles and organisation settings (screens still to come) */
   'organisation.manage': ['admin'],
+  /** the organisation's name and the defaults a new link starts from (every member reads them) */
+  'organisation.settings': ['admin'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type PermissionAction = keyof typeof PERMISSIONS;

@@ -14,5 +14,16 @@ export const paths = {
       path: '/links/:linkId/history',
       getHref: (linkId: string) => `/links/${encodeURIComponent(linkId)}/history`,
     },
+    sites: { path: '/sites', getHref: () => '/sites' },
+    newSite: { path: '/sites/new', getHref: () => '/sites/new' },
+    site: { path: '/sites/:siteId', getHref: (siteId: string) => `/sites/${encodeURIComponent(siteId)}` },
+    catalogue: { path: '/catalogue', getHref: () => '/catalogue' },
+    newEquipment: {
+      path: '/catalogue/new/:kind',
+      getHref: (kind: 'transmitter' | 'receiver') => `/catalogue/new/${kind}`,
+    },
+    equipment: { path: '/catalogue/:modelId', getHref: (modelId: string) => `/catalogue/${encodeURIComponent(modelId)}` },
+    catalogueImport: { path: '/catalogue/import', getHref: () => '/catalogue/import' },
+    settings: { path: '/settings', getHref: () => '/settings' },
   },
 } as const;

@@ -32,10 +32,30 @@ export const reviewKeys = {
 export const siteKeys = {
   all: ['sites'] as const,
   lists: () => [...siteKeys.all, 'list'] as const,
+  details: () => [...siteKeys.all, 'detail'] as const,
+  detail: (siteId: string) => [...siteKeys.details(), siteId] as const,
+};
+
+/**
+ * Links read for the sites screens (a site's links, the site plan's links). They sit under the
+ * links list key, so a change to any link refreshes them with the links list.
+ */
+export const siteLinkKeys = {
+  forSite: (siteId: string) => [...linkKeys.lists(), 'site', siteId] as const,
+  plan: () => [...linkKeys.lists(), 'site-plan'] as const,
 };
 
 export const equipmentKeys = {
   all: ['equipment'] as const,
   lists: () => [...equipmentKeys.all, 'list'] as const,
   list: (kind: EquipmentKind) => [...equipmentKeys.lists(), { kind }] as const,
+  /** the catalogue screen: both kinds, retired models included */
+  catalogue: () => [...equipmentKeys.lists(), 'catalogue'] as const,
+  details: () => [...equipmentKeys.all, 'detail'] as const,
+  detail: (modelId: string) => [...equipmentKeys.details(), modelId] as const,
+};
+
+export const organisationKeys = {
+  all: ['organisation'] as const,
+  settings: () => [...organisationKeys.all, 'settings'] as const,
 };

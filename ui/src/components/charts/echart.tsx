@@ -44,9 +44,11 @@ export interface EChartProps {
   ariaLabel: string;
   height?: number;
   testId?: string;
+  /** ECharts events by name (e.g. `click`), as echarts-for-react takes them */
+  onEvents?: Record<string, (params: unknown) => void>;
 }
 
-export function EChart({ option, ariaLabel, height = 280, testId }: EChartProps) {
+export function EChart({ option, ariaLabel, height = 280, testId, onEvents }: EChartProps) {
   const [mode] = useThemeMode();
   const colours = CHART_TEXT[mode];
   const themed: ChartOption = {
@@ -65,6 +67,7 @@ export function EChart({ option, ariaLabel, height = 280, testId }: EChartProps)
         notMerge
         lazyUpdate
         opts={{ renderer: 'svg' }}
+        onEvents={onEvents}
         style={{ height, width: '100%' }}
       />
     </div>

@@ -11,6 +11,7 @@ import {
   tokens,
 } from '@fluentui/react-components';
 import { SignOutRegular, WeatherMoonRegular, WeatherSunnyRegular } from '@fluentui/react-icons';
+import { isAllowed } from '@beamwright/link-core/contracts';
 import { paths } from '@/config/paths';
 import { ROLE_LABELS, useCurrentUser, useSignOut } from '@/lib/auth';
 import { useThemeMode } from '@/lib/theme';
@@ -52,6 +53,7 @@ const useStyles = makeStyles({
   },
   nav: {
     display: 'flex',
+    flexWrap: 'wrap',
     columnGap: tokens.spacingHorizontalXS,
     marginInlineStart: tokens.spacingHorizontalL,
     '@media (max-width: 640px)': { marginInlineStart: 0 },
@@ -120,6 +122,14 @@ export function AppShell() {
           >
             Links
           </NavLink>
+          <NavLink to={paths.app.sites.getHref()} className={({ isActive }) => mergeClasses(styles.navLink, isActive && styles.navLinkActive)}>
+            Sites
+          </NavLink>
+          {isAllowed(me?.role, 'organisation.settings') && (
+            <NavLink to={paths.app.settings.getHref()} className={({ isActive }) => mergeClasses(styles.navLink, isActive && styles.navLinkActive)}>
+              Settings
+            </NavLink>
+          )}
         </nav>
         <div className={styles.spacer} />
         <Tooltip content={mode === 'dark' ? 'Switch to the light theme' : 'Switch to the dark theme'} relationship="label">

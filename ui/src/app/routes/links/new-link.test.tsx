@@ -135,4 +135,19 @@ describe('new link (engineer)', () => {
     // what was typed is kept
     expect(nameInput()).toHaveValue('Quay office to pumping station');
   });
+
+  it("starts the design from the organisation's defaults and reads a bare path length in its unit", async () => {
+    const settings = { id: demoEngineer.organisation.id, name: demoEngineer.organisation.name, requiredMarginDb: 6, fadeProbability: 1e-4, visibilityDefinition: 'mor-5-percent', distanceUnit: 'm' };
+    const { calls } = await openNewLinkPage([{ path: '/organisation/settings', body: settings }, ...routes()]);
+    expect(await screen.findByText(/a number alone is read in metres/)).toBeInTheDocument();
+    expect(screen.getByTestId('new-link-defaults')).toHaveTextContent('fade probability 0.0001, visibility on the 5 % (MOR) contrast definition, and a required margin of 6 dB');
+    await userEvent.type(nameInput(), 'Depot to clinic');
+    await userEvent.type(pathInput(), '850');
+    await submit();
+    await waitFor(() => expect(posts(calls)).toHaveLength(1));
+    const design = (posts(calls)[0]!.body as { design: { rangeM: number; scintillation: { probability: number }; atmosphere: { visibilityDefinition: string } } }).design;
+    expect(design.rangeM).toBe(850);
+    expect(design.scintillation.probability).toBe(1e-4);
+    expect(design.atmosphere.visibilityDefinition).toBe('mor-5-percent');
+  });
 });

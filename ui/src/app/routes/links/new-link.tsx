@@ -19,7 +19,7 @@ import {
   makeStyles,
   tokens,
 } from '@fluentui/react-components';
-import { CreateLinkRequestSchema } from '@beamwright/link-core/contracts';
+import { CreateLinkRequestSchema, ORGANISATION_DEFAULTS, type DistanceUnit } from '@beamwright/link-core/contracts';
 import { parseQuantity } from '@beamwright/link-core/units';
 import { paths } from '@/config/paths';
 import { policies, useCurrentUser } from '@/lib/auth';
@@ -29,6 +29,7 @@ import { useCreateLink } from '@/features/links/api/create-link';
 import { getSitesQueryOptions, useSites } from '@/features/sites/api/get-sites';
 import { useSitePathGeometry } from '@/features/sites/hooks/use-site-path-geometry';
 import { starterDesign } from '@/features/link-design/starter-design';
+import { getOrganisationSettingsQueryOptions, useOrganisationSettings } from '@/features/organisation-settings/api/get-organisation-settings';
 
 const useStyles = makeStyles({
   card: { maxWidth: '640px', padding: tokens.spacingHorizontalXXL, display: 'grid', rowGap: tokens.spacingVerticalL },
@@ -44,21 +45,23 @@ const LABELS: Record<NewLinkField, string> = { name: 'Link name', siteAId: 'Site
  * The create request's own name rule; the path length is typed with its unit and read with
  * parseQuantity, and may be left empty when both sites give it (`slantRangeM`).
  */
-function newLinkFormSchema(slantRangeM: number | undefined) {
+function newLinkFormSchema(slantRangeM: number | undefined, defaultUnit: DistanceUnit) {
   return z
     .object({ name: CreateLinkRequestSchema.shape.name, siteAId: z.string(), siteBId: z.string(), rangeText: z.string() })
     .superRefine((values, context) => {
       if (values.siteAId && values.siteAId === values.siteBId) context.addIssue({ code: 'custom', path: ['siteBId'], message: 'must differ from site A' });
       if (values.rangeText.trim() === '' && slantRangeM !== undefined) return;
-      const parsed = parseQuantity(values.rangeText, 'length', { defaultUnit: 'km', allowZero: false });
+      const parsed = parseQuantity(values.rangeText, 'length', { defaultUnit, allowZero: false });
       if (!parsed.ok) context.addIssue({ code: 'custom', path: ['rangeText'], message: parsed.reason === 'is empty' ? 'is required (or choose both sites)' : parsed.reason });
     })
     .transform((values) => {
-      const parsed = parseQuantity(values.rangeText, 'length', { defaultUnit: 'km', allowZero: false });
+      const parsed = parseQuantity(values.rangeText, 'length', { defaultUnit, allowZero: false });
       return { ...values, rangeM: parsed.ok ? parsed.valueSi : (slantRangeM ?? 0) };
     });
 }
 type NewLinkValues = z.input<ReturnType<typeof newLinkFormSchema>>;
+
+const UNIT_WORD: Record<DistanceUnit, string> = { m: 'metres', km: 'kilometres', mi: 'miles' };
 
 /** The api's paths of a create request, as this form's fields. */
 function targetOf(path: string): IssueTarget<NewLinkField> {
@@ -74,11 +77,16 @@ export function NewLinkRoute() {
   const role = useCurrentUser().data?.role;
   const sites = useSites();
   const createLink = useCreateLink();
+  // the organisation's defaults; the engine's own while they load or when they cannot be read
+  const settings = useOrganisationSettings().data;
+  const distanceUnit = settings?.distanceUnit ?? ORGANISATION_DEFAULTS.distanceUnit;
+  const defaultUnitRef = useRef<DistanceUnit>(distanceUnit);
+  defaultUnitRef.current = distanceUnit;
   // the schema depends on the chosen sites; the resolver reads the latest one
   const slantRangeRef = useRef<number | undefined>(undefined);
   const form = useForm<NewLinkValues, unknown, z.output<ReturnType<typeof newLinkFormSchema>>>({
     defaultValues: { name: '', siteAId: '', siteBId: '', rangeText: '' },
-    resolver: withFieldMessages((values, context, options) => zodResolver(newLinkFormSchema(slantRangeRef.current))(values, context, options), labelledMessage(LABELS)),
+    resolver: withFieldMessages((values, context, options) => zodResolver(newLinkFormSchema(slantRangeRef.current, defaultUnitRef.current))(values, context, options), labelledMessage(LABELS)),
     // the messages beside the fields are announced; the focus stays where the user is
     shouldFocusError: false,
   });
@@ -93,7 +101,7 @@ export function NewLinkRoute() {
 
   const onSubmit = handleSubmit((values) => {
     createLink.mutate(
-      { name: values.name, design: starterDesign(values.rangeM), siteAId: values.siteAId || null, siteBId: values.siteBId || null, note: 'Created with typical starting values' },
+      { name: values.name, design: starterDesign(values.rangeM, { fadeProbability: settings?.fadeProbability, visibilityDefinition: settings?.visibilityDefinition }), siteAId: values.siteAId || null, siteBId: values.siteBId || null, note: 'Created with typical starting values' },
       {
         onSuccess: (link) => navigate(paths.app.link.getHref(link.id)),
         onError: (error) => {
@@ -164,13 +172,18 @@ export function NewLinkRoute() {
               required={!geometry}
               validationMessage={fieldState.error?.message}
               validationState={fieldState.error ? 'error' : 'none'}
-              hint={geometry ? `From the two sites: ${formatDistance(geometry.slantRangeM)} slant range. Type a value to override it.` : 'e.g. 2.4 km or 850 m'}
+              hint={geometry ? `From the two sites: ${formatDistance(geometry.slantRangeM)} slant range. Type a value to override it.` : `e.g. 2.4 km or 850 m; a number alone is read in ${UNIT_WORD[distanceUnit]}`}
             >
               <Input {...field} onChange={(_, data) => field.onChange(data.value)} placeholder={geometry ? formatDistance(geometry.slantRangeM) : 'e.g. 2.4 km'} />
             </Field>
           )}
         />
-        <Caption1 className={styles.muted}>The starting figures are illustrative, not a recommendation.</Caption1>
+        <Caption1 className={styles.muted} data-testid="new-link-defaults">
+          The starting figures are illustrative, not a recommendation. From your organisation&apos;s settings: fade probability{' '}
+          {settings?.fadeProbability ?? ORGANISATION_DEFAULTS.fadeProbability}, visibility on the{' '}
+          {(settings?.visibilityDefinition ?? ORGANISATION_DEFAULTS.visibilityDefinition) === 'mor-5-percent' ? '5 % (MOR)' : '2 %'} contrast definition, and a
+          required margin of {settings?.requiredMarginDb ?? ORGANISATION_DEFAULTS.requiredMarginDb} dB.
+        </Caption1>
         <div className={styles.actions}>
           <Button onClick={() => navigate(paths.app.links.getHref())}>Cancel</Button>
           <Button type="submit" appearance="primary" disabled={createLink.isPending} icon={createLink.isPending ? <Spinner size="tiny" /> : undefined}>
@@ -185,6 +198,7 @@ export function NewLinkRoute() {
 /** Starts loading the site choices with the queryOptions useSites reads. */
 export const createLoader = (queryClient: QueryClient) => () => {
   void queryClient.prefetchQuery(getSitesQueryOptions());
+  void queryClient.prefetchQuery(getOrganisationSettingsQueryOptions());
   return null;
 };
 
