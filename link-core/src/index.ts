@@ -112,3 +112,19 @@ export { workedExampleDesign } from './examples/worked-example.js';
 
 // A seeded uniform generator for Monte-Carlo checks and benchmarks (no unseeded randomness)
 export { seededUniform } from './numeric/seeded-random.js';
+
+// Availability analysis of a site's records or cumulative table: months, outages, margin distribution,
+// ranges for a target availability (METHODS.md §11.4–§11.7)
+export { analyseRecordsAvailability, analyseClimatologyAvailability, AVAILABILITY_TARGETS } from './budget/availability-analysis.js';
+export type {
+  RecordsAnalysis,
+  RecordsAnalysisOptions,
+  ClimatologyAnalysis,
+  ClimatologyAnalysisOptions,
+  MonthAvailability,
+  Outage,
+  MarginBin,
+  MarginDistribution,
+  RangeForAvailability,
+  AvailabilityAtRange,
+} from './budget/availability-analysis.js';
