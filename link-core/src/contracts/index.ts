@@ -13,3 +13,5 @@ export * from './links.contract.js';
 export * from './reviews.contract.js';
 export * from './design-diff.js';
 export * from './workflow-rules.js';
+export * from './weather.contract.js';
+export * from './weather-columns.js';
