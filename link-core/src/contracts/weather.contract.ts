@@ -19,6 +19,9 @@ export const WEATHER_UPLOAD_LIMITS = {
   maxListedRowErrors: 1000,
 } as const;
 
+/** Hours of a year in the availability figures (365.25 days, as link-core's availability routines count). */
+export const HOURS_PER_YEAR = 8766;
+
 /** Units a visibility column may be in. */
 export const VISIBILITY_UNITS = ['m', 'km', 'mi', 'ft'] as const;
 export type VisibilityUnit = (typeof VISIBILITY_UNITS)[number];
