@@ -57,6 +57,8 @@ export function createRoutes(queryClient: QueryClient = defaultQueryClient): Rou
         { path: paths.app.newLink.path, lazy: lazyPage(() => import('@/app/routes/links/new-link'), queryClient), errorElement: <RouteError /> },
         { path: paths.app.link.path, lazy: lazyPage(() => import('@/app/routes/links/link-workspace'), queryClient), errorElement: <RouteError /> },
         { path: paths.app.linkHistory.path, lazy: lazyPage(() => import('@/app/routes/links/link-history'), queryClient), errorElement: <RouteError /> },
+        { path: paths.app.linkAvailability.path, lazy: lazyPage(() => import('@/app/routes/links/link-availability'), queryClient), errorElement: <RouteError /> },
+        { path: paths.app.weatherDatasets.path, lazy: lazyPage(() => import('@/app/routes/weather/weather-datasets'), queryClient), errorElement: <RouteError /> },
         { path: '*', lazy: () => import('@/app/routes/not-found') },
       ],
     },

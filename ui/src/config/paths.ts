@@ -14,5 +14,10 @@ export const paths = {
       path: '/links/:linkId/history',
       getHref: (linkId: string) => `/links/${encodeURIComponent(linkId)}/history`,
     },
+    linkAvailability: {
+      path: '/links/:linkId/availability',
+      getHref: (linkId: string) => `/links/${encodeURIComponent(linkId)}/availability`,
+    },
+    weatherDatasets: { path: '/weather', getHref: () => '/weather' },
   },
 } as const;
