@@ -34,7 +34,7 @@ import { linkPageLoader, useLinkIdParam } from '@/app/routes/links/link-route-pa
 const useStyles = makeStyles({
   page: { display: 'grid', rowGap: tokens.spacingVerticalXL, minWidth: 0 },
   card: { padding: tokens.spacingHorizontalXL, display: 'grid', rowGap: tokens.spacingVerticalM, minWidth: 0 },
-  pickers: { display: 'grid', gridTemplateColumns: 'repeat(auto-fit, minmax(min(220px, 100%), 1fr))', gap: tokens.spacingHorizontalM, alignItems: 'end', maxWidth: '960px' },
+  pickers: { display: 'grid', gridTemplateColumns: 'repeat(auto-fit, minmax(min(220px, 100%), 1fr))', gap: tokens.spacingHorizontalM, alignItems: 'start', maxWidth: '960px' },
   muted: { color: tokens.colorNeutralForeground3, maxWidth: '80ch' },
 });
 

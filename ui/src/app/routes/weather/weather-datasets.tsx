@@ -10,6 +10,7 @@ import { getSitesQueryOptions, useSites } from '@/features/sites/api/get-sites';
 
 const useStyles = makeStyles({
   page: { display: 'grid', rowGap: tokens.spacingVerticalXL, minWidth: 0 },
+  intro: { display: 'grid', rowGap: tokens.spacingVerticalS },
   card: { padding: tokens.spacingHorizontalXL, display: 'grid', rowGap: tokens.spacingVerticalM, minWidth: 0 },
   muted: { color: tokens.colorNeutralForeground3, maxWidth: '80ch' },
 });
@@ -24,9 +25,9 @@ export function WeatherDatasetsRoute() {
 
   return (
     <div className={styles.page}>
-      <div>
+      <div className={styles.intro}>
         <Title2 as="h1">Weather data</Title2>
-        <Body1 as="p" className={styles.muted}>
+        <Body1 as="p" className={styles.muted} style={{ margin: 0 }}>
           The visibility history of a site, from a weather service or an airport station, tells how often a link closes: each link&apos;s availability
           page computes it over the hours of a data set. Visibility measured at a station is not the visibility on the rooftops of a path.
         </Body1>

@@ -33,6 +33,10 @@ export function useUploadWeatherDataset() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: uploadWeatherDataset,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: weatherKeys.datasets() }),
+    onSuccess: (answer) => {
+      // the job as the 202 gave it: its progress shows before the first poll
+      if (answer.kind === 'queued') queryClient.setQueryData(weatherKeys.import(answer.job.jobId), answer.job);
+      return queryClient.invalidateQueries({ queryKey: weatherKeys.datasets() });
+    },
   });
 }

@@ -26,7 +26,7 @@ const useStyles = makeStyles({
 /** A synthetic example (the test table of reference case LB-03: not a real site), in km and %. */
 const EXAMPLE_TABLE = ['0.05\t0.05', '0.1\t0.1', '0.2\t0.2', '0.5\t0.5', '1\t1', '2\t3', '5\t10', '10\t30'].join('\n');
 
-const LABELS = { tableText: 'Cumulative table', requiredMarginDb: 'Required margin' } as const;
+const LABELS = { tableText: 'Cumulative table', requiredMarginDb: 'Required margin over the table' } as const;
 
 const FormSchema = z
   .object({

@@ -29,7 +29,6 @@ import {
 import { VISIBILITY_DEFINITIONS } from '@beamwright/link-core';
 import {
   ErrorBodySchema,
-  VISIBILITY_DEFINITION_LABELS,
   VISIBILITY_UNITS,
   VISIBILITY_UNIT_LABELS,
   WEATHER_OPTIONAL_COLUMNS,
@@ -62,6 +61,7 @@ const useStyles = makeStyles({
   fileInput: { font: 'inherit', color: 'inherit', maxWidth: '100%' },
   progress: { display: 'grid', rowGap: tokens.spacingVerticalXS, maxWidth: '640px' },
   list: { margin: 0, paddingInlineStart: tokens.spacingHorizontalL },
+  intro: { display: 'grid', rowGap: tokens.spacingVerticalXS },
 });
 
 type MappingField = keyof WeatherColumnMapping;
@@ -104,6 +104,9 @@ const FormSchema = z
 function targetOf(path: string): IssueTarget<FormField> {
   return path in LABELS ? { field: path as FormField } : null;
 }
+
+/** Short enough for a select; the contract's longer labels go into the hint and the data set table. */
+const SHORT_DEFINITION_LABELS: Record<(typeof VISIBILITY_DEFINITIONS)[number], string> = { 'mor-5-percent': 'MOR (5 % contrast)', 'contrast-2-percent': '2 % contrast' };
 
 const OPTIONAL_FIELDS = Object.keys(WEATHER_OPTIONAL_COLUMNS) as OptionalWeatherColumn[];
 const megabytes = (bytes: number) => `${(bytes / (1024 * 1024)).toFixed(1)} MB`;
@@ -273,9 +276,9 @@ export function WeatherImportForm({ sites, defaultSiteId }: { sites: readonly { 
         <MessageBar intent="success" data-testid="import-outcome">
           <MessageBarBody>
             <MessageBarTitle>Imported “{step.name}”</MessageBarTitle>
-            {step.result.rowsImported.toLocaleString('en-GB')} rows
+            {step.result.rowsImported.toLocaleString('en-GB')} row{step.result.rowsImported === 1 ? '' : 's'}
             {step.result.missingVisibilityCount > 0 ? `, ${step.result.missingVisibilityCount.toLocaleString('en-GB')} of them without a visibility reading (counted as missing data)` : ''}
-            {step.result.rowErrorCount > 0 ? `; ${step.result.rowErrorCount.toLocaleString('en-GB')} rows left out, listed below` : ''}.
+            {step.result.rowErrorCount > 0 ? `; ${step.result.rowErrorCount.toLocaleString('en-GB')} row${step.result.rowErrorCount === 1 ? '' : 's'} left out, listed below` : ''}.
           </MessageBarBody>
         </MessageBar>
       )}
@@ -285,7 +288,9 @@ export function WeatherImportForm({ sites, defaultSiteId }: { sites: readonly { 
           <MessageBar intent={step.error.statusCode === 409 ? 'warning' : 'error'}>
             <MessageBarBody>
               <MessageBarTitle>{step.error.statusCode === 409 ? 'Import cancelled' : 'Nothing was imported'}</MessageBarTitle>
-              {step.error.message}
+              {step.error.rowErrors?.length
+                ? `${(step.error.rowErrorCount ?? step.error.rowErrors.length).toLocaleString('en-GB')} problem${(step.error.rowErrorCount ?? 0) === 1 ? '' : 's'} in the file's rows, listed below. Fix them in the file and choose it again, or import only the valid rows.`
+                : step.error.message}
             </MessageBarBody>
           </MessageBar>
           {step.error.rowErrors && step.error.rowErrors.length > 0 && (
@@ -365,7 +370,7 @@ function MappingStep({
 
   return (
     <form onSubmit={onSubmit} noValidate aria-label="Columns of the weather file" className={styles.root} data-testid="weather-mapping">
-      <div>
+      <div className={styles.intro}>
         <Subtitle2 as="h3">Which column is which</Subtitle2>
         <Body1 as="p" className={styles.muted} style={{ margin: 0 }}>
           {step.file.name}
@@ -452,7 +457,7 @@ function MappingStep({
             <Field
               label={LABELS['mapping.visibilityDefinition']}
               required
-              hint="Airport sensors, METAR and SYNOP report MOR"
+              hint="Airport sensors, METAR and SYNOP report MOR (5 %)"
               validationMessage={message('mapping.visibilityDefinition', fieldState.error)}
               validationState={fieldState.error ? 'error' : 'none'}
             >
@@ -460,7 +465,7 @@ function MappingStep({
                 <option value="">choose the definition</option>
                 {VISIBILITY_DEFINITIONS.map((definition) => (
                   <option key={definition} value={definition}>
-                    {VISIBILITY_DEFINITION_LABELS[definition]}
+                    {SHORT_DEFINITION_LABELS[definition]}
                   </option>
                 ))}
               </Select>
