@@ -1,5 +1,4 @@
-import { queryOptions, useQuery, useQueryClient } from '@tanstack/react-query';
-import { useEffect } from 'react';
+import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { WeatherImportJob } from '@beamwright/link-core/contracts';
 import { api } from '@/lib/api-client';
 import { weatherKeys } from '@/lib/query-keys';
@@ -8,20 +7,16 @@ export const isImportEnded = (job: WeatherImportJob | undefined) => job?.state =
 
 export const getWeatherImport = (jobId: string, signal?: AbortSignal) => api.get<WeatherImportJob>(`/weather-datasets/imports/${encodeURIComponent(jobId)}`, { signal });
 
-/** Polled a few times a second until the import has ended. */
+/** Polled a few times a second until the import has ended; a finished import refreshes the data sets. */
 export const getWeatherImportQueryOptions = (jobId: string) =>
   queryOptions({
     queryKey: weatherKeys.import(jobId),
-    queryFn: ({ signal }) => getWeatherImport(jobId, signal),
+    queryFn: async ({ signal, client }) => {
+      const job = await getWeatherImport(jobId, signal);
+      if (job.state === 'succeeded') void client.invalidateQueries({ queryKey: weatherKeys.datasets() });
+      return job;
+    },
     refetchInterval: (query) => (isImportEnded(query.state.data) ? false : 400),
   });
 
-export function useWeatherImport(jobId: string | null) {
-  const queryClient = useQueryClient();
-  const query = useQuery({ ...getWeatherImportQueryOptions(jobId ?? ''), enabled: jobId !== null });
-  const succeeded = query.data?.state === 'succeeded';
-  useEffect(() => {
-    if (succeeded) void queryClient.invalidateQueries({ queryKey: weatherKeys.datasets() });
-  }, [succeeded, queryClient]);
-  return query;
-}
+export const useWeatherImport = (jobId: string | null) => useQuery({ ...getWeatherImportQueryOptions(jobId ?? ''), enabled: jobId !== null });

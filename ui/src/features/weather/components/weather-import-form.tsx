@@ -109,7 +109,7 @@ function targetOf(path: string): IssueTarget<FormField> {
 const SHORT_DEFINITION_LABELS: Record<(typeof VISIBILITY_DEFINITIONS)[number], string> = { 'mor-5-percent': 'MOR (5 % contrast)', 'contrast-2-percent': '2 % contrast' };
 
 const OPTIONAL_FIELDS = Object.keys(WEATHER_OPTIONAL_COLUMNS) as OptionalWeatherColumn[];
-const megabytes = (bytes: number) => `${(bytes / (1024 * 1024)).toFixed(1)} MB`;
+const megabytes = (bytes: number) => `${(bytes / (1024 * 1024)).toFixed(bytes < 10 * 1024 * 1024 ? 2 : 1)} MB`;
 
 function defaultValues(file: File, preview: CsvPreview, siteId: string | undefined): FormValues {
   const guess = preview.guess;
@@ -248,7 +248,7 @@ export function WeatherImportForm({ sites, defaultSiteId }: { sites: readonly { 
       )}
       {step.kind === 'uploading' && (
         <div className={styles.progress}>
-          <Field label={`Uploading ${step.file.name}`} validationMessage={`${megabytes(step.sent)} of ${megabytes(step.total)} sent`} validationState="none">
+          <Field label={`Uploading ${step.file.name}`} validationMessage={`${step.total > 0 ? Math.floor((100 * step.sent) / step.total) : 0} %: ${megabytes(step.sent)} of ${megabytes(step.total)} sent`} validationState="none">
             <ProgressBar value={step.total > 0 ? step.sent / step.total : undefined} max={1} aria-label={`Uploading ${step.file.name}`} data-testid="upload-progress" />
           </Field>
         </div>
