@@ -110,6 +110,93 @@ export function recordDurations(records: VisibilityRecords, options: RecordsAvai
   return { durationH, contiguous };
 }
 
+/**
+ * The usable records sorted by visibility (2 % km) with their hours, for time-weighted quantiles
+ * and counts below a threshold. Sorting numbers in a Float64Array is several times faster than
+ * sorting records: the hours go alongside as "most records last `baseH`, these few differ by …".
+ */
+interface SortedVisibility {
+  sorted: Float64Array;
+  baseH: number;
+  /** the records whose hours differ from baseH: visibility (sorted) and the running sum of the differences */
+  oddVisibility: Float64Array;
+  oddCumulativeH: Float64Array;
+  coveredHours: number;
+}
+
+function lowerBound(values: Float64Array, x: number): number {
+  let low = 0;
+  let high = values.length;
+  while (low < high) {
+    const middle = (low + high) >>> 1;
+    if (values[middle]! < x) low = middle + 1;
+    else high = middle;
+  }
+  return low;
+}
+
+function upperBound(values: Float64Array, x: number): number {
+  let low = 0;
+  let high = values.length;
+  while (low < high) {
+    const middle = (low + high) >>> 1;
+    if (values[middle]! <= x) low = middle + 1;
+    else high = middle;
+  }
+  return low;
+}
+
+function sortVisibility(records: VisibilityRecords, durationH: Float64Array): SortedVisibility {
+  const scale = morScale(records.visibilityDefinition) / 1000;
+  let usable = 0;
+  let baseH = Number.NaN;
+  for (let i = 0; i < durationH.length; i++) {
+    if (Number.isNaN(durationH[i]!)) continue;
+    if (usable === 0) baseH = durationH[i]!;
+    usable++;
+  }
+  const sorted = new Float64Array(usable);
+  const odd: { v: number; delta: number }[] = [];
+  let coveredHours = 0;
+  for (let i = 0, k = 0; i < durationH.length; i++) {
+    const hours = durationH[i]!;
+    if (Number.isNaN(hours)) continue;
+    const v = records.visibilityM[i]! * scale;
+    sorted[k++] = v;
+    coveredHours += hours;
+    if (hours !== baseH) odd.push({ v, delta: hours - baseH });
+  }
+  sorted.sort();
+  odd.sort((a, b) => a.v - b.v);
+  const oddVisibility = Float64Array.from(odd, (entry) => entry.v);
+  const oddCumulativeH = new Float64Array(odd.length + 1);
+  for (let i = 0; i < odd.length; i++) oddCumulativeH[i + 1] = oddCumulativeH[i]! + odd[i]!.delta;
+  return { sorted, baseH, oddVisibility, oddCumulativeH, coveredHours };
+}
+
+/** Hours of the records with a visibility below `x` (2 % km); `orEqual` counts those at `x` too. */
+function hoursBelow(prepared: SortedVisibility, x: number, orEqual = false): number {
+  const bound = orEqual ? upperBound : lowerBound;
+  const count = bound(prepared.sorted, x);
+  return count === 0 ? 0 : count * prepared.baseH + prepared.oddCumulativeH[bound(prepared.oddVisibility, x)]!;
+}
+
+/**
+ * The lowest visibility (2 % km) whose records, with every record below it, exceed `hours`: the
+ * time quantile from below. The last visibility when none does.
+ */
+function visibilityQuantile(prepared: SortedVisibility, hours: number): number {
+  const { sorted } = prepared;
+  let low = 0;
+  let high = sorted.length - 1;
+  while (low < high) {
+    const middle = (low + high) >>> 1;
+    if (hoursBelow(prepared, sorted[middle]!, true) > hours) high = middle;
+    else low = middle + 1;
+  }
+  return sorted[low]!;
+}
+
 /** Availability of one calendar month, over every year of the records. */
 export interface MonthAvailability {
   /** calendar month, 1 (January) … 12 (December), of the record's timestamp in UTC */
@@ -142,10 +229,20 @@ export function availabilityByMonth(design: LinkDesignInput, records: Visibility
   const scale = morScale(records.visibilityDefinition) / 1000;
   const covered = new Float64Array(12);
   const down = new Float64Array(12);
+  let month = 0;
+  let monthStartMs = Number.NaN;
+  let nextMonthMs = Number.NaN;
   for (let i = 0; i < durationH.length; i++) {
     const duration = durationH[i]!;
     if (Number.isNaN(duration)) continue;
-    const month = new Date(timestamps[i]!).getUTCMonth();
+    const time = timestamps[i]!;
+    // records come in time order: a new Date only when a record leaves the current month
+    if (!(time >= monthStartMs && time < nextMonthMs)) {
+      const date = new Date(time);
+      month = date.getUTCMonth();
+      monthStartMs = Date.UTC(date.getUTCFullYear(), month, 1);
+      nextMonthMs = Date.UTC(date.getUTCFullYear(), month + 1, 1);
+    }
     covered[month] += duration;
     if (isDown(limit, records.visibilityM[i]! * scale)) down[month] += duration;
   }
@@ -262,45 +359,65 @@ export interface MarginDistributionOptions extends RecordsAvailabilityOptions {
  * @see METHODS.md §11.6.
  */
 export function marginDistributionFromRecords(design: LinkDesignInput, records: VisibilityRecords, options: MarginDistributionOptions = {}): MarginDistribution {
+  const { durationH } = recordDurations(records, options);
+  return marginDistributionOf(design, records, durationH, options, monotoneAttenuation(design) ? sortVisibility(records, durationH) : null);
+}
+
+function marginDistributionOf(
+  design: LinkDesignInput,
+  records: VisibilityRecords,
+  durationH: Float64Array,
+  options: MarginDistributionOptions,
+  prepared: SortedVisibility | null,
+): MarginDistribution {
   const binWidthDb = options.binWidthDb ?? 2;
   if (!(binWidthDb > 0) || !Number.isFinite(binWidthDb)) throw new RangeError('binWidthDb: must be a finite number greater than 0');
   const limit = weatherLimitOf(design, options.requiredMarginDb ?? 0);
-  const { durationH } = recordDurations(records, options);
   const scale = morScale(records.visibilityDefinition) / 1000;
-  const margins: number[] = [];
-  const hours: number[] = [];
+  const margins = new Float64Array(durationH.length);
   let covered = 0;
+  let worst = Infinity;
+  let best = -Infinity;
   for (let i = 0; i < durationH.length; i++) {
     const duration = durationH[i]!;
     if (Number.isNaN(duration)) continue;
-    margins.push(marginAfterWeatherDb(limit, records.visibilityM[i]! * scale));
-    hours.push(duration);
+    const margin = marginAfterWeatherDb(limit, records.visibilityM[i]! * scale);
+    margins[i] = margin;
     covered += duration;
+    if (margin < worst) worst = margin;
+    if (margin > best) best = margin;
   }
-  const order = margins.map((_, index) => index).sort((a, b) => margins[a]! - margins[b]!);
   const shares = options.shares ?? [0.5, 0.9, 0.99, 0.999, 0.9999];
-  // the margin exceeded for a share s of the time is the (1 − s) time quantile from below
-  const exceeded = shares.map((share) => {
-    if (order.length === 0) return { share, marginDb: Number.NaN };
-    const wanted = (1 - share) * covered;
-    let cumulative = 0;
-    for (const index of order) {
-      cumulative += hours[index]!;
-      if (cumulative > wanted) return { share, marginDb: margins[index]! };
-    }
-    return { share, marginDb: margins[order[order.length - 1]!]! };
-  });
-  const worst = order.length ? margins[order[0]!]! : Number.NaN;
-  const best = order.length ? margins[order[order.length - 1]!]! : Number.NaN;
+  // the margin exceeded for a share s of the time is the (1 − s) time quantile from below; with γ
+  // falling in V the margin rises with V, so it is the margin at that quantile of the visibility
+  let marginQuantile: (hours: number) => number;
+  if (prepared) {
+    marginQuantile = (hours) => marginAfterWeatherDb(limit, visibilityQuantile(prepared, hours));
+  } else {
+    const order = Array.from({ length: durationH.length }, (_, i) => i)
+      .filter((i) => !Number.isNaN(durationH[i]!))
+      .sort((a, b) => margins[a]! - margins[b]!);
+    marginQuantile = (hours) => {
+      let cumulative = 0;
+      for (const index of order) {
+        cumulative += durationH[index]!;
+        if (cumulative > hours) return margins[index]!;
+      }
+      return margins[order[order.length - 1]!]!;
+    };
+  }
+  const exceeded = shares.map((share) => ({ share, marginDb: covered > 0 ? marginQuantile((1 - share) * covered) : Number.NaN }));
   const floorDb = Math.floor(Math.max(options.floorDb ?? -30, Number.isFinite(worst) ? worst : 0) / binWidthDb) * binWidthDb;
   const top = Number.isFinite(best) ? Math.max(floorDb + binWidthDb, Math.floor(best / binWidthDb) * binWidthDb + binWidthDb) : floorDb + binWidthDb;
   const binCount = Math.round((top - floorDb) / binWidthDb);
   const bins: MarginBin[] = Array.from({ length: binCount }, (_, i) => ({ lowerDb: floorDb + i * binWidthDb, upperDb: floorDb + (i + 1) * binWidthDb, hours: 0 }));
   let belowHours = 0;
-  for (let i = 0; i < margins.length; i++) {
+  for (let i = 0; i < durationH.length; i++) {
+    const hours = durationH[i]!;
+    if (Number.isNaN(hours)) continue;
     const margin = margins[i]!;
-    if (margin < floorDb) belowHours += hours[i]!;
-    else bins[Math.min(binCount - 1, Math.floor((margin - floorDb) / binWidthDb))]!.hours += hours[i]!;
+    if (margin < floorDb) belowHours += hours;
+    else bins[Math.min(binCount - 1, Math.floor((margin - floorDb) / binWidthDb))]!.hours += hours;
   }
   return { binWidthDb, bins, belowHours, floorDb, exceeded, coveredHours: covered };
 }
@@ -377,36 +494,16 @@ export function rangesForRecordsAvailability(
   targets.forEach(validateTarget);
   requireMonotoneAttenuation(design);
   const { durationH } = recordDurations(records, options);
-  const visibilities: number[] = [];
-  const hours: number[] = [];
-  let covered = 0;
-  for (let i = 0; i < durationH.length; i++) {
-    if (Number.isNaN(durationH[i]!)) continue;
-    visibilities.push(records.visibilityM[i]!);
-    hours.push(durationH[i]!);
-    covered += durationH[i]!;
-  }
-  if (visibilities.length === 0) throw new RangeError('records.visibilityM: needs at least one usable visibility');
-  const order = visibilities.map((_, index) => index).sort((a, b) => visibilities[a]! - visibilities[b]!);
+  return rangesOf(design, records, sortVisibility(records, durationH), targets, options.requiredMarginDb ?? 0);
+}
+
+function rangesOf(design: LinkDesignInput, records: VisibilityRecords, prepared: SortedVisibility, targets: readonly number[], requiredMarginDb: number): RangeForAvailability[] {
+  if (prepared.sorted.length === 0) throw new RangeError('records.visibilityM: needs at least one usable visibility');
+  const scale = morScale(records.visibilityDefinition) / 1000;
   return targets.map((target) => {
-    // The first visibility (from below) at which the hours strictly below it plus its own tie group exceed
-    // the allowed downtime: V_min may rise to it, not beyond.
-    const allowedDownH = (1 - target) * covered;
-    let below = 0;
-    let deciding = visibilities[order[order.length - 1]!]!;
-    for (let k = 0; k < order.length; ) {
-      const v = visibilities[order[k]!]!;
-      let tie = 0;
-      let j = k;
-      while (j < order.length && visibilities[order[j]!]! === v) tie += hours[order[j++]!]!;
-      if (below + tie > allowedDownH) {
-        deciding = v;
-        break;
-      }
-      below += tie;
-      k = j;
-    }
-    return rangeWhereMinimumVisibilityIs(design, deciding, records.visibilityDefinition, options.requiredMarginDb ?? 0, target);
+    // V_min may rise to the deciding visibility and no further: its records (and every one below) exceed the allowed downtime
+    const deciding = visibilityQuantile(prepared, (1 - target) * prepared.coveredHours) / scale;
+    return rangeWhereMinimumVisibilityIs(design, deciding, records.visibilityDefinition, requiredMarginDb, target);
   });
 }
 
@@ -476,42 +573,37 @@ export interface AvailabilityAtRange {
 export function availabilityAgainstRange(design: LinkDesignInput, records: VisibilityRecords, rangesM: readonly number[], options: RecordsAvailabilityOptions = {}): AvailabilityAtRange[] {
   requireMonotoneAttenuation(design);
   const { durationH } = recordDurations(records, options);
-  const scale = morScale(records.visibilityDefinition) / 1000;
-  const pairs: { v: number; h: number }[] = [];
-  for (let i = 0; i < durationH.length; i++) if (!Number.isNaN(durationH[i]!)) pairs.push({ v: records.visibilityM[i]! * scale, h: durationH[i]! });
-  pairs.sort((a, b) => a.v - b.v);
-  const sorted = Float64Array.from(pairs, (pair) => pair.v);
-  const cumulative = new Float64Array(pairs.length + 1);
-  for (let i = 0; i < pairs.length; i++) cumulative[i + 1] = cumulative[i]! + pairs[i]!.h;
-  const covered = cumulative[pairs.length]!;
+  return sweepOf(design, sortVisibility(records, durationH), rangesM, options.requiredMarginDb ?? 0);
+}
+
+function sweepOf(design: LinkDesignInput, prepared: SortedVisibility, rangesM: readonly number[], requiredMarginDb: number): AvailabilityAtRange[] {
+  const covered = prepared.coveredHours;
   return rangesM.map((rangeM, index) => {
     if (!(rangeM > 0) || !Number.isFinite(rangeM)) throw new RangeError(`rangesM.${index}: must be a finite number greater than 0`);
     if (covered === 0) return { rangeM, availability: Number.NaN };
-    const limit = weatherLimitOf({ ...design, rangeM }, options.requiredMarginDb ?? 0);
+    const limit = weatherLimitOf({ ...design, rangeM }, requiredMarginDb);
     let downHours: number;
     if (Number.isNaN(limit.threshold2PercentKm)) {
+      // V_min on the inverse's clamp: every record's margin decides
       downHours = 0;
-      for (let i = 0; i < sorted.length; i++) if (isDown(limit, sorted[i]!)) downHours += pairs[i]!.h;
+      const { sorted, baseH, oddVisibility, oddCumulativeH } = prepared;
+      for (let i = 0; i < sorted.length; i++) if (isDown(limit, sorted[i]!)) downHours += baseH;
+      for (let i = 0; i < oddVisibility.length; i++) if (isDown(limit, oddVisibility[i]!)) downHours += oddCumulativeH[i + 1]! - oddCumulativeH[i]!;
     } else {
-      // records strictly below the threshold are down: the first index at or above it
-      let low = 0;
-      let high = sorted.length;
-      while (low < high) {
-        const middle = (low + high) >>> 1;
-        if (sorted[middle]! < limit.threshold2PercentKm) low = middle + 1;
-        else high = middle;
-      }
-      downHours = cumulative[low]!;
+      // the records strictly below the threshold are down
+      downHours = hoursBelow(prepared, limit.threshold2PercentKm);
     }
     return { rangeM, availability: (covered - downHours) / covered };
   });
 }
 
-function requireMonotoneAttenuation(design: LinkDesignInput): void {
+function monotoneAttenuation(design: LinkDesignInput): boolean {
   const resolved = resolveDesign(design);
-  if (resolved.fogNumeratorPerKm === 0 && resolved.wavelengthM < VISIBILITY_REFERENCE_WAVELENGTH_M) {
-    throw new RangeError('transmitter.wavelengthM: availability against range needs a wavelength of at least 550 nm');
-  }
+  return !(resolved.fogNumeratorPerKm === 0 && resolved.wavelengthM < VISIBILITY_REFERENCE_WAVELENGTH_M);
+}
+
+function requireMonotoneAttenuation(design: LinkDesignInput): void {
+  if (!monotoneAttenuation(design)) throw new RangeError('transmitter.wavelengthM: availability against range needs a wavelength of at least 550 nm');
 }
 
 /** The availability targets a link is usually sold at: 99 %, 99.9 % and 99.99 % of the hours. */
@@ -567,16 +659,19 @@ export function availabilitySweepRangesM(designRangeM: number, points = 40): num
  */
 export function analyseRecordsAvailability(design: LinkDesignInput, records: VisibilityRecords, options: RecordsAnalysisOptions = {}): RecordsAnalysis {
   const totals = availabilityFromRecords(design, records, options);
-  const monotone = !(resolveDesign(design).fogNumeratorPerKm === 0 && design.transmitter.wavelengthM < VISIBILITY_REFERENCE_WAVELENGTH_M);
-  const usable = totals.usableCount > 0;
+  const monotone = monotoneAttenuation(design);
+  const { durationH } = recordDurations(records, options);
+  // sorted once, shared by the margin quantiles, the ranges and the sweep
+  const prepared = monotone ? sortVisibility(records, durationH) : null;
+  const requiredMarginDb = options.requiredMarginDb ?? 0;
   return {
     totals,
     minimumVisibilityM: minimumVisibilityM(design, records.visibilityDefinition, options),
     months: records.timestampsMs ? availabilityByMonth(design, records, options) : [],
     outages: outagesFromRecords(design, records, { ...options, longest: options.longestOutages }),
-    marginDistribution: marginDistributionFromRecords(design, records, { ...options, binWidthDb: options.marginBinWidthDb, floorDb: options.marginFloorDb }),
-    rangesForAvailability: monotone && usable ? rangesForRecordsAvailability(design, records, options.targets ?? AVAILABILITY_TARGETS, options) : null,
-    availabilityAgainstRange: monotone ? availabilityAgainstRange(design, records, options.rangesM ?? availabilitySweepRangesM(design.rangeM), options) : null,
+    marginDistribution: marginDistributionOf(design, records, durationH, { ...options, binWidthDb: options.marginBinWidthDb, floorDb: options.marginFloorDb }, prepared),
+    rangesForAvailability: prepared && totals.usableCount > 0 ? rangesOf(design, records, prepared, options.targets ?? AVAILABILITY_TARGETS, requiredMarginDb) : null,
+    availabilityAgainstRange: prepared ? sweepOf(design, prepared, options.rangesM ?? availabilitySweepRangesM(design.rangeM), requiredMarginDb) : null,
   };
 }
 
