@@ -1,6 +1,19 @@
 import { Body, Controller, Delete, Get, Headers, HttpCode, HttpStatus, Param, Post, Query, Res, UploadedFile, UseInterceptors } from '@nestjs/common';
 import { FileInterceptor } from '@nestjs/platform-express';
-import { ApiAcceptedResponse, ApiBearerAuth, ApiBody, ApiConsumes, ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiTags } from '@nestjs/swagger';
+import {
+  ApiAcceptedResponse,
+  ApiBearerAuth,
+  ApiBody,
+  ApiConflictResponse,
+  ApiConsumes,
+  ApiCreatedResponse,
+  ApiNoContentResponse,
+  ApiOkResponse,
+  ApiPayloadTooLargeResponse,
+  ApiTags,
+  ApiUnprocessableEntityResponse,
+  ApiUnsupportedMediaTypeResponse,
+} from '@nestjs/swagger';
 import type { Response } from 'express';
 import {
   WeatherColumnMappingSchema,
@@ -67,7 +80,9 @@ export class WeatherDatasetsController {
   })
   @ApiCreatedResponse({ schema: openApiSchema(WeatherImportResultSchema, 'output') })
   @ApiAcceptedResponse({ description: 'the import runs on: poll statusUrl (also in Location)', schema: openApiSchema(WeatherImportJobSchema, 'output') })
-  @ApiOkResponse({ description: '422: rows could not be read and onRowErrors was reject; nothing was stored', schema: openApiSchema(WeatherRowErrorsBodySchema, 'output') })
+  @ApiUnprocessableEntityResponse({ description: 'rows could not be read and onRowErrors was reject (or no row could be read); nothing was stored', schema: openApiSchema(WeatherRowErrorsBodySchema, 'output') })
+  @ApiPayloadTooLargeResponse({ description: 'the file is over 50 MB, or has more than 2 000 000 rows' })
+  @ApiUnsupportedMediaTypeResponse({ description: 'the content is not CSV text (or gzip-compressed CSV text), whatever the file name' })
   async upload(
     @CurrentUser() caller: AuthUser,
     @UploadedFile() file: StoredWeatherUpload | undefined,
@@ -94,6 +109,7 @@ export class WeatherDatasetsController {
   @RolesFor('weather.write')
   @HttpCode(HttpStatus.OK)
   @ApiOkResponse({ description: 'the import as it is after the request (cancelled, or still stopping)', schema: openApiSchema(WeatherImportJobSchema, 'output') })
+  @ApiConflictResponse({ description: 'the import has already ended' })
   cancelImport(@CurrentUser() caller: AuthUser, @Param('jobId', uuidParam('jobId')) jobId: string): Promise<WeatherImportJob> {
     return this.datasets.cancelImport(caller, jobId);
   }
