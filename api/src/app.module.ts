@@ -7,6 +7,7 @@ import { appConfig, type AppConfig } from './config/app.config.js';
 import { authConfig } from './config/auth.config.js';
 import { ENV_FILE } from './config/checkout-paths.js';
 import { databaseConfig, type DatabaseConfig } from './config/database.config.js';
+import { weatherConfig } from './config/weather.config.js';
 import { validateEnv } from './config/env.schema.js';
 import { ApiExceptionFilter } from './common/filters/api-exception.filter.js';
 import { JwtAuthGuard } from './common/guards/jwt-auth.guard.js';
@@ -20,6 +21,7 @@ import { SitesModule } from './sites/sites.module.js';
 import { LinksModule } from './links/links.module.js';
 import { EvaluateModule } from './evaluate/evaluate.module.js';
 import { EquipmentModule } from './equipment/equipment.module.js';
+import { WeatherModule } from './weather/weather.module.js';
 import { API_PATH_PATTERN, isUiBuilt } from './spa/ui-dist.js';
 
 @Module({
@@ -28,7 +30,7 @@ import { API_PATH_PATTERN, isUiBuilt } from './spa/ui-dist.js';
       isGlobal: true,
       envFilePath: ENV_FILE,
       validate: validateEnv,
-      load: [appConfig, authConfig, databaseConfig],
+      load: [appConfig, authConfig, databaseConfig, weatherConfig],
     }),
     TypeOrmModule.forRootAsync({
       inject: [databaseConfig.KEY],
@@ -56,6 +58,7 @@ import { API_PATH_PATTERN, isUiBuilt } from './spa/ui-dist.js';
     EquipmentModule,
     LinksModule,
     EvaluateModule,
+    WeatherModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: JwtAuthGuard },

@@ -8,6 +8,7 @@ import { toErrorBody } from './common/filters/api-exception.filter.js';
 import { applyServerTimeouts, dropStalledBodies, MAX_JSON_BODY_BYTES, refuseOversizedBodies } from './common/http/request-limits.js';
 import { noStoreForApi, securityHeaders } from './common/http/security-headers.js';
 import { assignCspNonce, serveSpaIndex } from './spa/spa-index.js';
+import { WEATHER_UPLOAD_BODY_LIMIT } from './weather/weather-upload.storage.js';
 import { isUiBuilt } from './spa/ui-dist.js';
 import type { AppConfig } from './config/app.config.js';
 
@@ -36,7 +37,7 @@ export function configureApp(app: INestApplication): void {
   expressApp.use(securityHeaders({ hstsMaxAgeSeconds: config?.hstsMaxAgeSeconds ?? 0, docsPath: `/${API_PREFIX}/docs` }));
   expressApp.use(noStoreForApi(API_PREFIX));
   if (config) expressApp.use(serveSpaIndex(config.uiDistDir));
-  expressApp.use(refuseOversizedBodies(MAX_JSON_BODY_BYTES));
+  expressApp.use(refuseOversizedBodies(MAX_JSON_BODY_BYTES, [WEATHER_UPLOAD_BODY_LIMIT]));
   expressApp.use(dropStalledBodies(requestTimeoutMs));
   // Our own JSON parser (the app is created with bodyParser: false) so that a malformed body
   // gets the API's error shape instead of express's HTML page.

@@ -4,7 +4,7 @@ import request from 'supertest';
 import { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { evaluateLink, LinkDesignSchema, type LinkDesign } from '@beamwright/link-core';
-import { LinkDetailSchema, LinkListResponseSchema } from '@beamwright/link-core/contracts';
+import { LinkDetailSchema, LinkListResponseSchema, RevisionAvailabilitySchema, WeatherDatasetListResponseSchema } from '@beamwright/link-core/contracts';
 import { readDemoFixtures, type DemoFixtures } from '../src/database/seeds/demo-fixtures.js';
 import { seedDemo } from '../src/database/seeds/demo-seed.js';
 import { Organisation } from '../src/organisations/organisation.entity.js';
@@ -52,9 +52,9 @@ describe('demo seed (e2e)', () => {
     const dataSource = app.get(DataSource);
     const first = await seedDemo(dataSource, { demoPassword: password, fixtures });
     organisationId = first.organisationId;
-    expect(first).toMatchObject({ usersCreated: 4, sitesCreated: fixtures.sites.length, equipmentCreated: fixtures.equipment.length, linksCreated: fixtures.links.length });
+    expect(first).toMatchObject({ usersCreated: 4, sitesCreated: fixtures.sites.length, equipmentCreated: fixtures.equipment.length, linksCreated: fixtures.links.length, weatherDatasetsCreated: fixtures.weather.length });
     const second = await seedDemo(dataSource, { demoPassword: password, fixtures });
-    expect(second).toEqual({ organisationId, usersCreated: 0, usersUpdated: 0, sitesCreated: 0, equipmentCreated: 0, linksCreated: 0 });
+    expect(second).toEqual({ organisationId, usersCreated: 0, usersUpdated: 0, sitesCreated: 0, equipmentCreated: 0, linksCreated: 0, weatherDatasetsCreated: 0 });
 
     const engineer = fixtures.users.find((user) => user.role === 'engineer')!;
     const login = await request(app.getHttpServer()).post('/api/auth/login').send({ email: engineer.email, password }).expect(200);
@@ -88,5 +88,20 @@ describe('demo seed (e2e)', () => {
     for (const variant of detail.variants!) expect(withoutWavelength(variant.design)).toEqual(withoutWavelength(detail.design));
     const earlier = (await request(app.getHttpServer()).get(`/api/links/${detail.id}/revisions/1`).set(...auth).expect(200)).body;
     expect(earlier.variants).toEqual([]);
+    // the invented weather of two sites: five years of hours each, with fog in its season
+    const weather = WeatherDatasetListResponseSchema.parse((await request(app.getHttpServer()).get('/api/weather-datasets').set(...auth).expect(200)).body).items;
+    expect(weather.map((dataset) => dataset.name).sort()).toEqual(fixtures.weather.map((dataset) => dataset.name).sort());
+    for (const dataset of weather) {
+      expect(dataset).toMatchObject({ invented: true, visibilityDefinition: 'mor-5-percent', recordCount: 43_824 });
+      expect(dataset.notes).toMatch(/^Invented demo data, not a measurement/);
+    }
+    const harbourLink = list.items.find((item) => item.name === 'Depot to Harbour Office')!;
+    const harbourWeather = weather.find((dataset) => dataset.siteName === 'Harbour Office tower')!;
+    const availability = RevisionAvailabilitySchema.parse(
+      (await request(app.getHttpServer()).get(`/api/links/${harbourLink.id}/revisions/${harbourLink.revision}/availability`).query({ datasetId: harbourWeather.id }).set(...auth).expect(200)).body,
+    );
+    expect(availability.months).toHaveLength(12);
+    expect(availability.availability).toBeGreaterThan(0.9);
+    expect(availability.availability).toBeLessThan(1);
   });
 });

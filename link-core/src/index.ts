@@ -124,3 +124,18 @@ export { compareWavelengths, referenceWeather, CompareWavelengthsOptionsSchema, 
 export type { CompareWavelengthsOptions, ReferenceWeather, ReferenceWeatherClass, WavelengthComparison, WavelengthComparisonRow } from './budget/wavelength-comparison.js';
 export { marginSweep, marginGrid, sweepAxisValues, SweepAxisSchema, SWEEP_SPACINGS, MAX_SWEEP_POINTS, MAX_GRID_POINTS } from './budget/sweeps.js';
 export type { SweepAxis, SweepAxisValues, SweepSpacing, MarginSweep, MarginGrid } from './budget/sweeps.js';
+// Availability analysis of a site's records or cumulative table: months, outages, margin distribution,
+// ranges for a target availability (METHODS.md §11.4–§11.7)
+export { analyseRecordsAvailability, analyseClimatologyAvailability, AVAILABILITY_TARGETS } from './budget/availability-analysis.js';
+export type {
+  RecordsAnalysis,
+  RecordsAnalysisOptions,
+  ClimatologyAnalysis,
+  ClimatologyAnalysisOptions,
+  MonthAvailability,
+  Outage,
+  MarginBin,
+  MarginDistribution,
+  RangeForAvailability,
+  AvailabilityAtRange,
+} from './budget/availability-analysis.js';

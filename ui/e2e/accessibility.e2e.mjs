@@ -235,6 +235,50 @@ describe('accessibility of every screen and dialog, light and dark (axe-core)', 
     }
   });
 
+  it('as the engineer: weather data, its mapping step with field errors, the delete dialog and a link availability page', async () => {
+    const { page } = browser;
+    await page.getByRole('link', { name: 'Weather data' }).click();
+    await page.getByTestId('weather-datasets').waitFor();
+    await expectAccessible(page, 'weather data (engineer)');
+
+    // a file whose visibility column the guess cannot name: the step asks for it beside the field
+    await page.getByTestId('weather-file-input').setInputFiles({
+      name: 'short.csv',
+      mimeType: 'text/csv',
+      buffer: Buffer.from('stamp,reading\n2024-01-01T00:00Z,900\n2024-01-01T01:00Z,fog\n2024-01-01T02:00Z,900\n'),
+    });
+    await page.getByTestId('weather-mapping').waitFor();
+    await page.getByRole('button', { name: 'Import the data set' }).click();
+    const required = page.getByText('Visibility column is required');
+    await required.waitFor();
+    const requiredId = await required.evaluate((node) => node.closest('[id]')?.id);
+    assert.ok((await describedByIds(page.getByLabel('Visibility column'))).includes(requiredId), 'the error describes the visibility column field');
+    await expectAccessible(page, 'weather mapping step with field errors');
+
+    await page.getByRole('button', { name: /^Delete Harbour Office tower/ }).click();
+    const dialog = page.getByRole('dialog');
+    await dialog.getByText(/records go with it/).waitFor();
+    await expectAccessible(page, 'delete weather data set dialog');
+    await dialog.getByRole('button', { name: 'Keep it' }).click();
+    await dialog.waitFor({ state: 'detached' });
+
+    await openLinkByName(page, 'Depot to Harbour Office');
+    await page.getByRole('button', { name: 'Availability' }).click();
+    await page.getByTestId('availability-results').waitFor({ timeout: 30_000 });
+    for (const chart of ['chart-availability-months', 'chart-availability-range', 'chart-availability-margins']) {
+      await page.getByTestId(chart).locator('svg').first().waitFor();
+      await page.locator('section').filter({ has: page.getByTestId(chart) }).getByRole('button', { name: /Show the values as a table/ }).click();
+      await page.getByTestId(`${chart}-table`).waitFor();
+    }
+    await expectAccessible(page, 'availability over a data set with the chart tables open (engineer)');
+    await page.getByRole('button', { name: 'Fill in a synthetic example' }).click();
+    await page.getByRole('button', { name: 'Compute the availability' }).click();
+    await page.getByTestId('climatology-results').waitFor();
+    await page.getByTestId('chart-climatology-range').locator('svg').first().waitFor();
+    await expectAccessible(page, 'availability from a cumulative table (engineer)');
+    await screenshot(page, 'accessibility-availability');
+  });
+
   it('as the reviewer: links, read-only workspace, history and the review decision dialogs', async () => {
     const { page, context } = browser;
     await page.getByRole('button', { name: 'Sign out' }).click();
@@ -278,6 +322,9 @@ describe('accessibility of every screen and dialog, light and dark (axe-core)', 
     await expectAccessible(page, 'return-with-comment dialog with a field error');
     await dialog.getByRole('button', { name: 'Cancel' }).click();
     await dialog.waitFor({ state: 'detached' });
+    await page.getByRole('link', { name: 'Weather data' }).click();
+    await page.getByTestId('weather-datasets').waitFor();
+    await expectAccessible(page, 'weather data (reviewer, read only)');
   });
 
   it('the sites, a site with a field error, the site plan at 320 px, and the settings (admin)', async () => {

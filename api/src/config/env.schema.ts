@@ -47,6 +47,15 @@ export const EnvSchema = z.object({
   HSTS_MAX_AGE_SECONDS: z.coerce.number().int().min(0).max(63_072_000).default(defaultNumber('HSTS_MAX_AGE_SECONDS')),
   /** a request whose headers and body have not all arrived within this many seconds is dropped */
   HTTP_REQUEST_TIMEOUT_SECONDS: z.coerce.number().min(1).max(600).default(defaultNumber('HTTP_REQUEST_TIMEOUT_SECONDS')),
+  /**
+   * how long POST /api/weather-datasets waits for its import to end before answering 202 with the
+   * job to poll (0: always 202; a client may also ask with `Prefer: respond-async`)
+   */
+  WEATHER_IMPORT_WAIT_SECONDS: z.coerce.number().min(0).max(120).default(defaultNumber('WEATHER_IMPORT_WAIT_SECONDS')),
+  /** a running import whose heartbeat is older than this is taken as stopped (its process died) and retried */
+  WEATHER_IMPORT_STALL_SECONDS: z.coerce.number().min(2).max(3600).default(defaultNumber('WEATHER_IMPORT_STALL_SECONDS')),
+  /** how often an interrupted import is run again before it is reported failed */
+  WEATHER_IMPORT_RETRIES: z.coerce.number().int().min(0).max(10).default(defaultNumber('WEATHER_IMPORT_RETRIES')),
   /** folder of the built UI; defaults to <checkout>/ui/dist */
   UI_DIST_DIR: z.string().min(1).optional(),
 });

@@ -8,6 +8,10 @@ import { LinkRevisionVariant } from '../links/link-revision-variant.entity.js';
 import { LinkReview } from '../links/link-review.entity.js';
 import { UserSession } from '../auth/user-session.entity.js';
 import { RateLimitCounter } from '../rate-limits/rate-limit-counter.entity.js';
+import { WeatherDataset } from '../weather/weather-dataset.entity.js';
+import { WeatherRecord } from '../weather/weather-record.entity.js';
+import { WeatherImport } from '../weather/weather-import.entity.js';
+import { WeatherImportChunk } from '../weather/weather-import-chunk.entity.js';
 
 /** Every entity, for the CLI data source and the tests (the app also auto-loads them per module). */
-export const ENTITIES = [Organisation, User, Site, EquipmentModel, Link, LinkRevision, LinkRevisionVariant, LinkReview, UserSession, RateLimitCounter];
+export const ENTITIES = [Organisation, User, Site, EquipmentModel, Link, LinkRevision, LinkRevisionVariant, LinkReview, UserSession, RateLimitCounter, WeatherDataset, WeatherRecord, WeatherImport, WeatherImportChunk];

@@ -15,3 +15,5 @@ export * from './variants.contract.js';
 export * from './reviews.contract.js';
 export * from './design-diff.js';
 export * from './workflow-rules.js';
+export * from './weather.contract.js';
+export * from './weather-columns.js';

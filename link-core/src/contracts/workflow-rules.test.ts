@@ -26,6 +26,7 @@ const EXPECTED: Record<PermissionAction, [admin: boolean, engineer: boolean, rev
   'link.archive': [false, true, false, false],
   'site.write': [true, true, false, false],
   'equipment.write': [true, true, false, false],
+  'weather.write': [true, true, false, false],
   'organisation.manage': [true, false, false, false],
   'organisation.settings': [true, false, false, false],
 };

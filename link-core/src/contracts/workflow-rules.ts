@@ -38,6 +38,8 @@ export const PERMISSIONS = {
   'site.write': ['engineer', 'admin'],
   /** the equipment catalogue, reference data like the sites */
   'equipment.write': ['engineer', 'admin'],
+  /** weather data sets (a site's visibility history): upload and delete, reference data like the sites */
+  'weather.write': ['engineer', 'admin'],
   /** members, roles and organisation settings (screens still to come) */
   'organisation.manage': ['admin'],
   /** the organisation's name and the defaults a new link starts from (every member reads them) */

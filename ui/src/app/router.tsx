@@ -61,6 +61,8 @@ export function createRoutes(queryClient: QueryClient = defaultQueryClient): Rou
         { path: paths.app.newSite.path, lazy: lazyPage(() => import('@/app/routes/sites/site-editor'), queryClient), errorElement: <RouteError /> },
         { path: paths.app.site.path, lazy: lazyPage(() => import('@/app/routes/sites/site-editor'), queryClient), errorElement: <RouteError /> },
         { path: paths.app.settings.path, lazy: lazyPage(() => import('@/app/routes/settings/organisation-settings'), queryClient), errorElement: <RouteError /> },
+        { path: paths.app.linkAvailability.path, lazy: lazyPage(() => import('@/app/routes/links/link-availability'), queryClient), errorElement: <RouteError /> },
+        { path: paths.app.weatherDatasets.path, lazy: lazyPage(() => import('@/app/routes/weather/weather-datasets'), queryClient), errorElement: <RouteError /> },
         { path: '*', lazy: () => import('@/app/routes/not-found') },
       ],
     },

@@ -25,5 +25,10 @@ export const paths = {
     equipment: { path: '/catalogue/:modelId', getHref: (modelId: string) => `/catalogue/${encodeURIComponent(modelId)}` },
     catalogueImport: { path: '/catalogue/import', getHref: () => '/catalogue/import' },
     settings: { path: '/settings', getHref: () => '/settings' },
+    linkAvailability: {
+      path: '/links/:linkId/availability',
+      getHref: (linkId: string) => `/links/${encodeURIComponent(linkId)}/availability`,
+    },
+    weatherDatasets: { path: '/weather', getHref: () => '/weather' },
   },
 } as const;

@@ -59,3 +59,23 @@ export const organisationKeys = {
   all: ['organisation'] as const,
   settings: () => [...organisationKeys.all, 'settings'] as const,
 };
+
+/** Weather data sets of the organisation, and the import jobs that fill them. */
+export const weatherKeys = {
+  all: ['weather'] as const,
+  datasets: () => [...weatherKeys.all, 'datasets'] as const,
+  imports: () => [...weatherKeys.all, 'imports'] as const,
+  import: (jobId: string) => [...weatherKeys.imports(), jobId] as const,
+};
+
+/**
+ * A revision's availability over a data set sits under its link (a new revision refreshes it) and
+ * is also refreshed with the data sets (one deleted or replaced).
+ */
+export const availabilityKeys = {
+  forLink: (linkId: string) => [...linkKeys.detail(linkId), 'availability'] as const,
+  overDataset: (linkId: string, revision: number, datasetId: string, requiredMarginDb: number) =>
+    [...availabilityKeys.forLink(linkId), { revision, datasetId, requiredMarginDb }] as const,
+  /** the stored design of one revision, which the availability from a typed table is computed for */
+  revisionDesign: (linkId: string, revision: number) => [...availabilityKeys.forLink(linkId), 'revision', revision] as const,
+};

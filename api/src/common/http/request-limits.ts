@@ -26,12 +26,20 @@ function refuseAndClose(response: Response, statusCode: number, message: string)
   response.once('finish', () => response.socket?.destroy());
 }
 
+/** A route whose bodies may be larger than the JSON limit (an upload); its own route checks the part sizes. */
+export interface BodyLimitException {
+  method: string;
+  /** the request path, exactly (no parameters) */
+  path: string;
+  maxBytes: number;
+}
+
 /**
  * Refuses a body from its declared Content-Length before reading a byte of it. body-parser checks
  * the same header but then drains the whole body before answering, so a client declaring 100 MB
  * would be read to the end first.
  */
-export function refuseOversizedBodies(maxBytes: number) {
+export function refuseOversizedBodies(maxBytes: number, larger: readonly BodyLimitException[] = []) {
   return (request: Request, response: Response, next: NextFunction): void => {
     const declared = request.headers['content-length'];
     if (declared !== undefined) {
@@ -40,8 +48,9 @@ export function refuseOversizedBodies(maxBytes: number) {
         refuseAndClose(response, 400, 'Content-Length is not a valid byte count');
         return;
       }
-      if (bytes > maxBytes) {
-        refuseAndClose(response, 413, `The request body of ${bytes} bytes is over the limit of ${maxBytes} bytes`);
+      const limit = larger.find((exception) => exception.method === request.method && exception.path === request.path)?.maxBytes ?? maxBytes;
+      if (bytes > limit) {
+        refuseAndClose(response, 413, `The request body of ${bytes} bytes is over the limit of ${limit} bytes`);
         return;
       }
     }

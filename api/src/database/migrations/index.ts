@@ -9,6 +9,7 @@ import { CreateRateLimitCounters1796200000000 } from './1796200000000-CreateRate
 import { CreateUserSessionsAndDeactivation1796200100000 } from './1796200100000-CreateUserSessionsAndDeactivation.js';
 import { AddLinkArchiveAndPathChange1796300000000 } from './1796300000000-AddLinkArchiveAndPathChange.js';
 import { AddRevisionVariants1796414178325 } from './1796414178325-AddRevisionVariants.js';
+import { CreateWeatherDatasetsAndImports1796415183158 } from './1796415183158-CreateWeatherDatasetsAndImports.js';
 import { AddOrganisationSettingsAndRetiredEquipment1796500000000 } from './1796500000000-AddOrganisationSettingsAndRetiredEquipment.js';
 
 export const MIGRATIONS = [
@@ -19,5 +20,6 @@ export const MIGRATIONS = [
   CreateUserSessionsAndDeactivation1796200100000,
   AddLinkArchiveAndPathChange1796300000000,
   AddRevisionVariants1796414178325,
+  CreateWeatherDatasetsAndImports1796415183158,
   AddOrganisationSettingsAndRetiredEquipment1796500000000,
 ];

@@ -8,6 +8,7 @@ import { Link } from '../../links/link.entity.js';
 import { Site } from '../../sites/site.entity.js';
 import { readDemoFixtures, type DemoFixtures } from './demo-fixtures.js';
 import { seedDemoLink } from './demo-links.js';
+import { seedDemoWeather } from './demo-weather.js';
 
 export interface SeedSummary {
   organisationId: string;
@@ -16,12 +17,13 @@ export interface SeedSummary {
   sitesCreated: number;
   equipmentCreated: number;
   linksCreated: number;
+  weatherDatasetsCreated: number;
 }
 
 /**
  * Seeds the fictional demo organisation: people, sites, the equipment catalogue and links with
  * their revision and review history. Idempotent: it finds its organisation by slug, users by
- * e-mail, sites, models and links by name; creates what is missing; brings names, roles and the
+ * e-mail, sites, models, links and weather data sets by name; creates what is missing; brings names, roles and the
  * password (from DEMO_PASSWORD) back to the fixture's values; never deletes or rewrites a link.
  */
 export async function seedDemo(
@@ -73,7 +75,12 @@ export async function seedDemo(
       await seedDemoLink(manager, { organisationId: organisation.id, userIds, userRoles, siteIds, now }, link);
       linksCreated += 1;
     }
-    return { organisationId: organisation.id, usersCreated, usersUpdated, sitesCreated, equipmentCreated, linksCreated };
+    const weatherDatasetsCreated = await seedDemoWeather(
+      manager,
+      { organisationId: organisation.id, siteIds, createdById: userIds.get(fixtures.users.find((user) => user.role === 'engineer')?.email.toLowerCase() ?? '') ?? null },
+      fixtures.weather,
+    );
+    return { organisationId: organisation.id, usersCreated, usersUpdated, sitesCreated, equipmentCreated, linksCreated, weatherDatasetsCreated };
   });
 }
 

@@ -25,7 +25,7 @@ try {
   await dataSource.initialize();
   const summary = await seedDemo(dataSource, { demoPassword: env.DEMO_PASSWORD });
   console.log(
-    `Demo seeded (organisation ${summary.organisationId}): created ${summary.usersCreated} users, ${summary.sitesCreated} sites, ${summary.equipmentCreated} equipment models, ${summary.linksCreated} links; updated ${summary.usersUpdated} users`,
+    `Demo seeded (organisation ${summary.organisationId}): created ${summary.usersCreated} users, ${summary.sitesCreated} sites, ${summary.equipmentCreated} equipment models, ${summary.linksCreated} links, ${summary.weatherDatasetsCreated} weather data sets (invented); updated ${summary.usersUpdated} users`,
   );
 } catch (error) {
   console.error(`Seeding failed: ${error instanceof Error ? error.message : String(error)}`);

@@ -130,6 +130,12 @@ export function AppShell() {
               Settings
             </NavLink>
           )}
+          <NavLink
+            to={paths.app.weatherDatasets.getHref()}
+            className={({ isActive }) => mergeClasses(styles.navLink, isActive && styles.navLinkActive)}
+          >
+            Weather data
+          </NavLink>
         </nav>
         <div className={styles.spacer} />
         <Tooltip content={mode === 'dark' ? 'Switch to the light theme' : 'Switch to the dark theme'} relationship="label">

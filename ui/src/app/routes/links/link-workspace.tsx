@@ -1,6 +1,6 @@
 import { Link as RouterLink } from 'react-router-dom';
 import { Button, Skeleton, SkeletonItem } from '@fluentui/react-components';
-import { HistoryRegular } from '@fluentui/react-icons';
+import { HistoryRegular, WeatherPartlyCloudyDayRegular } from '@fluentui/react-icons';
 import { paths } from '@/config/paths';
 import { policies, useCurrentUser } from '@/lib/auth';
 import { ErrorView } from '@/components/errors/route-error';
@@ -28,6 +28,14 @@ function HistoryButton({ linkId }: { linkId: string }) {
   );
 }
 
+function AvailabilityButton({ linkId }: { linkId: string }) {
+  return (
+    <RouterLink to={paths.app.linkAvailability.getHref(linkId)} tabIndex={-1}>
+      <Button icon={<WeatherPartlyCloudyDayRegular />}>Availability</Button>
+    </RouterLink>
+  );
+}
+
 /** Installers, reviewers and admins read the stored design, as does everyone on an archived link: no inputs, no save. */
 function DesignViewer({ link, role, userId }: { link: LinkDetail; role: Role | undefined; userId: string | undefined }) {
   const styles = useWorkspaceStyles();
@@ -38,6 +46,7 @@ function DesignViewer({ link, role, userId }: { link: LinkDetail; role: Role | u
         actions={
           <>
             <HistoryButton linkId={link.id} />
+            <AvailabilityButton linkId={link.id} />
             <ReviewActions linkId={link.id} revision={link.revision} status={link.status} role={role} isAuthor={link.author.id === userId} archived={link.archived} />
           </>
         }
@@ -86,7 +95,18 @@ export function LinkWorkspaceRoute() {
   if (link.isError) return <ErrorView error={link.error} />;
   // an archived link is read-only, for engineers too, until it is restored
   if (!policies.canEditDesigns(role) || link.data.archived) return <DesignViewer link={link.data} role={role} userId={me?.user.id} />;
-  return <DesignEditor key={link.data.id} link={link.data} historyAction={<HistoryButton linkId={link.data.id} />} />;
+  return (
+    <DesignEditor
+      key={link.data.id}
+      link={link.data}
+      historyAction={
+        <>
+          <HistoryButton linkId={link.data.id} />
+          <AvailabilityButton linkId={link.data.id} />
+        </>
+      }
+    />
+  );
 }
 
 export const createLoader = linkPageLoader;

@@ -1,0 +1,24 @@
+import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
+import type { RevisionAvailability } from '@beamwright/link-core/contracts';
+import { api } from '@/lib/api-client';
+import { availabilityKeys } from '@/lib/query-keys';
+
+export const getRevisionAvailability = (linkId: string, revision: number, datasetId: string, requiredMarginDb: number, signal?: AbortSignal) =>
+  api.get<RevisionAvailability>(`/links/${encodeURIComponent(linkId)}/revisions/${revision}/availability`, { signal, params: { datasetId, requiredMarginDb } });
+
+export const getRevisionAvailabilityQueryOptions = (linkId: string, revision: number, datasetId: string, requiredMarginDb: number) =>
+  queryOptions({
+    queryKey: availabilityKeys.overDataset(linkId, revision, datasetId, requiredMarginDb),
+    queryFn: ({ signal }) => getRevisionAvailability(linkId, revision, datasetId, requiredMarginDb, signal),
+    // the figures of the previous choice stay on screen while the next ones come
+    placeholderData: keepPreviousData,
+    // a data set's records never change: the answer stays good until the data set or link changes
+    staleTime: Infinity,
+  });
+
+export function useRevisionAvailability(linkId: string, revision: number | null, datasetId: string | null, requiredMarginDb: number) {
+  return useQuery({
+    ...getRevisionAvailabilityQueryOptions(linkId, revision ?? 0, datasetId ?? '', requiredMarginDb),
+    enabled: revision !== null && datasetId !== null,
+  });
+}
