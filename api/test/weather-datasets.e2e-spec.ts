@@ -139,6 +139,34 @@ describe('weather data sets (e2e)', () => {
     expect(availability.marginDistribution.bins.reduce((sum, bin) => sum + bin.hours, 0) + availability.marginDistribution.belowHours).toBeCloseTo(expected.coveredHours, 6);
   });
 
+  it('analyses a variant of the revision instead of its design when asked (?variant=N), and 404s an unknown one', async () => {
+    const visibilityM = [20000, 20000, 800, 800, 20000, 300, 20000, 20000];
+    const upload = await uploadWeather(app, engineer(), hourlyCsv('2023-05-01T00:00:00Z', visibilityM), { name: 'Variant hours' }).expect(201);
+    const { id } = WeatherImportResultSchema.parse(upload.body);
+    const primary = { ...workedExampleDesign(), rangeM: 1000 };
+    const longer = { ...primary, rangeM: 3000 };
+    const response = await http()
+      .post('/api/links')
+      .set(...bearer(engineer()))
+      .send({ name: `Weather variants ${Math.random()}`, design: primary, variants: [{ name: '3 km instead', design: longer }] })
+      .expect(201);
+    const link = LinkDetailSchema.parse(response.body);
+    const read = async (query: Record<string, unknown>) =>
+      RevisionAvailabilitySchema.parse((await http().get(`/api/links/${link.id}/revisions/1/availability`).query({ datasetId: id, ...query }).set(...bearer(engineer())).expect(200)).body);
+    const own = await read({});
+    const variant = await read({ variant: 0 });
+    expect(own.variant).toBeNull();
+    expect(variant.variant).toEqual({ index: 0, name: '3 km instead' });
+    const timestampsMs = visibilityM.map((_, index) => Date.parse('2023-05-01T00:00:00Z') + index * 3_600_000);
+    const expectedOf = (design: LinkDesignInput) => availabilityFromRecords(design, { visibilityM, timestampsMs, visibilityDefinition: 'mor-5-percent' }).availability;
+    expect(own.availability).toBe(expectedOf(link.design));
+    expect(variant.availability).toBe(expectedOf(link.variants![0]!.design));
+    expect(variant.clearAirMarginDb).toBeLessThan(own.clearAirMarginDb);
+    await http().get(`/api/links/${link.id}/revisions/1/availability`).query({ datasetId: id, variant: 3 }).set(...bearer(engineer())).expect(404);
+    const bad = await http().get(`/api/links/${link.id}/revisions/1/availability`).query({ datasetId: id, variant: 9 }).set(...bearer(engineer())).expect(400);
+    expect(bad.body.issues).toEqual([{ path: 'variant', message: 'must be at most 7' }]);
+  });
+
   describe('availability from a typed cumulative table', () => {
     interface ReferenceCase {
       id: string;

@@ -32,7 +32,7 @@ export class WeatherAvailabilityController {
     @Param('revision', new PositiveIntParamPipe('revision')) revision: number,
     @Query(new ZodValidationPipe(RevisionAvailabilityQuerySchema)) query: z.output<typeof RevisionAvailabilityQuerySchema>,
   ): Promise<RevisionAvailability> {
-    return this.availability.fromRecords(caller, id, revision, query.datasetId, query.requiredMarginDb);
+    return this.availability.fromRecords(caller, id, revision, query.datasetId, query.requiredMarginDb, query.variant);
   }
 
   @Post(':id/revisions/:revision/availability/climatology')

@@ -1,4 +1,4 @@
-import { BadRequestException, Injectable } from '@nestjs/common';
+import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
 import {
   analyseClimatologyAvailability,
   analyseRecordsAvailability,
@@ -37,13 +37,17 @@ export class WeatherAvailabilityService {
     private readonly datasets: WeatherDatasetsService,
   ) {}
 
-  private async designOf(caller: AuthUser, linkId: string, revision: number): Promise<LinkDesignInput> {
+  /** The revision's design, or one of its variants' (each read as the engine that stored it meant it). */
+  private async designOf(caller: AuthUser, linkId: string, revision: number, variantIndex?: number): Promise<{ design: LinkDesignInput; variant: { index: number; name: string } | null }> {
     const stored = await this.links.getRevision(caller, linkId, revision);
-    return readStoredDesign(stored.design, stored.linkCoreVersion);
+    if (variantIndex === undefined) return { design: readStoredDesign(stored.design, stored.linkCoreVersion), variant: null };
+    const variant = stored.variants?.find((candidate) => candidate.index === variantIndex);
+    if (!variant) throw new NotFoundException(`revision ${revision} has no variant ${variantIndex}`);
+    return { design: readStoredDesign(variant.design, variant.linkCoreVersion), variant: { index: variant.index, name: variant.name } };
   }
 
-  async fromRecords(caller: AuthUser, linkId: string, revision: number, datasetId: string, requiredMarginDb: number): Promise<RevisionAvailability> {
-    const design = await this.designOf(caller, linkId, revision);
+  async fromRecords(caller: AuthUser, linkId: string, revision: number, datasetId: string, requiredMarginDb: number, variantIndex?: number): Promise<RevisionAvailability> {
+    const { design, variant } = await this.designOf(caller, linkId, revision, variantIndex);
     const { dataset, records } = await this.datasets.recordsOf(caller, datasetId);
     const analysis = analyseRecordsAvailability(
       design,
@@ -54,6 +58,7 @@ export class WeatherAvailabilityService {
     return {
       linkId,
       revision,
+      variant,
       datasetId,
       requiredMarginDb,
       visibilityDefinition: dataset.visibilityDefinition,
@@ -88,8 +93,13 @@ export class WeatherAvailabilityService {
     };
   }
 
-  async fromClimatology(caller: AuthUser, linkId: string, revision: number, request: Required<Pick<ClimatologyAvailabilityRequest, 'climatology'>> & { requiredMarginDb: number }): Promise<ClimatologyAvailabilityResponse> {
-    const design = await this.designOf(caller, linkId, revision);
+  async fromClimatology(
+    caller: AuthUser,
+    linkId: string,
+    revision: number,
+    request: Required<Pick<ClimatologyAvailabilityRequest, 'climatology'>> & { requiredMarginDb: number; variant?: number },
+  ): Promise<ClimatologyAvailabilityResponse> {
+    const { design, variant } = await this.designOf(caller, linkId, revision, request.variant);
     let analysis: ReturnType<typeof analyseClimatologyAvailability>;
     try {
       analysis = analyseClimatologyAvailability(design, request.climatology, { requiredMarginDb: request.requiredMarginDb });
@@ -103,6 +113,7 @@ export class WeatherAvailabilityService {
     return {
       linkId,
       revision,
+      variant,
       requiredMarginDb: request.requiredMarginDb,
       availability: totals.availability,
       unavailability: totals.unavailability,

@@ -10,6 +10,7 @@ import { VISIBILITY_DEFINITIONS, type VisibilityDefinition } from '../schemas/li
 import { UserRefSchema } from './auth.contract.js';
 import { IsoDateTimeSchema, textField } from './common.contract.js';
 import { ErrorBodySchema } from './error.contract.js';
+import { MAX_VARIANTS_PER_REVISION } from './variants.contract.js';
 
 /** What one upload may hold: 50 MB on the wire (gzip counts compressed) and 2 million rows. */
 export const WEATHER_UPLOAD_LIMITS = {
@@ -212,8 +213,17 @@ const requiredMarginDb = z.coerce
   .max(100, 'must be at most 100 dB')
   .default(0);
 
-/** `GET /api/links/:id/revisions/:n/availability?datasetId=…&requiredMarginDb=…` */
+/** A variant of the revision instead of its design: its 0-based position (absent: the revision's own design). */
+const variantIndex = z.coerce
+  .number({ error: 'must be a whole number' })
+  .int('must be a whole number')
+  .min(0, 'must be at least 0')
+  .max(MAX_VARIANTS_PER_REVISION - 1, `must be at most ${MAX_VARIANTS_PER_REVISION - 1}`)
+  .optional();
+
+/** `GET /api/links/:id/revisions/:n/availability?datasetId=…&requiredMarginDb=…[&variant=N]` */
 export const RevisionAvailabilityQuerySchema = z.strictObject({
+  variant: variantIndex,
   datasetId: z.uuid({ error: (issue) => (issue.input === undefined ? 'is required' : 'must be a data set id (UUID)') }),
   /** margin that must remain after the weather loss [dB] (default 0) */
   requiredMarginDb,
@@ -239,6 +249,8 @@ export type AvailabilityMethod = z.infer<typeof AvailabilityMethodSchema>;
 export const RevisionAvailabilitySchema = z.object({
   linkId: z.uuid(),
   revision: z.number().int(),
+  /** the variant whose design was analysed; null: the revision's own design (optional: added with variants) */
+  variant: z.object({ index: z.number().int(), name: z.string() }).nullable().optional(),
   datasetId: z.uuid(),
   requiredMarginDb: z.number(),
   visibilityDefinition: z.enum(VISIBILITY_DEFINITIONS),
@@ -279,6 +291,8 @@ export type RevisionAvailability = z.infer<typeof RevisionAvailabilitySchema>;
 /** `POST /api/links/:id/revisions/:n/availability/climatology`: a typed or pasted cumulative table. */
 export const ClimatologyAvailabilityRequestSchema = z.strictObject({
   climatology: VisibilityClimatologySchema,
+  /** a variant of the revision instead of its design (0-based position) */
+  variant: variantIndex,
   requiredMarginDb: z.number({ error: 'must be a number of dB' }).min(-50, 'must be at least -50 dB').max(100, 'must be at most 100 dB').default(0),
 });
 export type ClimatologyAvailabilityRequest = z.input<typeof ClimatologyAvailabilityRequestSchema>;
@@ -286,6 +300,8 @@ export type ClimatologyAvailabilityRequest = z.input<typeof ClimatologyAvailabil
 export const ClimatologyAvailabilityResponseSchema = z.object({
   linkId: z.uuid(),
   revision: z.number().int(),
+  /** the variant whose design was analysed; null: the revision's own design (optional: added with variants) */
+  variant: z.object({ index: z.number().int(), name: z.string() }).nullable().optional(),
   requiredMarginDb: z.number(),
   availability: z.number(),
   unavailability: z.number(),

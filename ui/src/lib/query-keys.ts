@@ -74,8 +74,8 @@ export const weatherKeys = {
  */
 export const availabilityKeys = {
   forLink: (linkId: string) => [...linkKeys.detail(linkId), 'availability'] as const,
-  overDataset: (linkId: string, revision: number, datasetId: string, requiredMarginDb: number) =>
-    [...availabilityKeys.forLink(linkId), { revision, datasetId, requiredMarginDb }] as const,
+  overDataset: (linkId: string, revision: number, datasetId: string, requiredMarginDb: number, variant: number | null = null) =>
+    [...availabilityKeys.forLink(linkId), { revision, datasetId, requiredMarginDb, variant }] as const,
   /** the stored design of one revision, which the availability from a typed table is computed for */
   revisionDesign: (linkId: string, revision: number) => [...availabilityKeys.forLink(linkId), 'revision', revision] as const,
 };

@@ -66,10 +66,14 @@ export function LinkAvailabilityRoute() {
   const datasetId = datasets.data?.some((dataset) => dataset.id === chosen) ? chosen : (fallback?.id ?? null);
   const dataset = datasets.data?.find((candidate) => candidate.id === datasetId);
 
-  const availability = useRevisionAvailability(linkId, revision, datasetId, requiredMarginDb);
-  const design = useRevisionDesign(linkId, revision);
+  const designs = useRevisionDesign(linkId, revision);
+  // one of the revision's variants instead of its design ('' in the address: the design itself)
+  const variantText = search.get('variant') ?? '';
+  const variant = designs.data?.variants.find((candidate) => String(candidate.index) === variantText) ?? null;
+  const availability = useRevisionAvailability(linkId, revision, datasetId, requiredMarginDb, variant?.index ?? null);
+  const design = { ...designs, data: designs.data ? (variant?.design ?? designs.data.design) : undefined };
 
-  const setChoice = (key: 'revision' | 'dataset' | 'margin', value: string) =>
+  const setChoice = (key: 'revision' | 'dataset' | 'margin' | 'variant', value: string) =>
     setSearch(
       (current) => {
         const next = new URLSearchParams(current);
@@ -117,6 +121,18 @@ export function LinkAvailabilityRoute() {
               ))}
             </Select>
           </Field>
+          {(designs.data?.variants.length ?? 0) > 0 && (
+            <Field label="Design" hint="The revision's design or one of its alternatives">
+              <Select value={variant ? String(variant.index) : ''} onChange={(_, data) => setChoice('variant', data.value)} data-testid="availability-variant">
+                <option value="">Revision {revision}'s design</option>
+                {designs.data!.variants.map((item) => (
+                  <option key={item.index} value={item.index}>
+                    Alternative: {item.name}
+                  </option>
+                ))}
+              </Select>
+            </Field>
+          )}
           <Field label="Weather data set" hint={dataset?.invented ? 'Invented demo data, not a measurement' : dataset?.siteName ? `Site: ${dataset.siteName}` : undefined}>
             <Select value={datasetId ?? ''} onChange={(_, data) => setChoice('dataset', data.value)} disabled={!datasets.data?.length} data-testid="availability-dataset">
               {(datasets.data ?? []).map((item) => (
