@@ -5,7 +5,7 @@
  * is about the size of the beam, an offset moves power onto the annulus and the term is a gain.
  */
 import { logCentredAnnularCapture, logMeanAnnularCapture, logOffsetAnnularCapture } from '../capture/capture.js';
-import { marcumQ1, marcumQ1Complement, noncentralChiSquare2TailsFast } from '../numeric/marcum-q.js';
+import { marcumQ1, marcumQ1Complement, noncentralChiSquare2SfFast } from '../numeric/marcum-q.js';
 import { findRootBrent } from '../numeric/root-finding.js';
 import { DB_PER_NATURAL_LOG_POWER } from '../units/constants.js';
 import { rayleighThresholdOverSigma } from './pointing.js';
@@ -61,7 +61,7 @@ export function ricianOutageRadius(jitterSigmaPerAxisM: number, staticOffsetM: n
   let r = offset > 10 && gaussianLimit > lower && gaussianLimit < upper ? gaussianLimit : 0.5 * (lower + upper);
   for (let i = 0; i < 100; i++) {
     // the allocation-free series where it applies, the general Q1 (quadrature for large offsets) elsewhere
-    const sf = noncentralChiSquare2TailsFast(r * r, noncentrality).sf;
+    const sf = noncentralChiSquare2SfFast(r * r, noncentrality);
     const residual = Math.log(sf === sf ? sf : marcumQ1(offset, r)) - logP;
     if (residual > 0) lower = r;
     else upper = r;
