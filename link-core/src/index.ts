@@ -140,3 +140,8 @@ export { workedExampleDesign } from './examples/worked-example.js';
 
 // A seeded uniform generator for Monte-Carlo checks and benchmarks (no unseeded randomness)
 export { seededUniform } from './numeric/seeded-random.js';
+
+// --- Batch margin kernel (METHODS.md §10.8): margins of many variations of one design, for sweeps,
+// heat maps and solvers, without a budget object per point. Kept together at the end of the entry.
+export { evaluateLinkMargins, linkMarginPointDesign, LINK_MARGIN_FIELDS } from './budget/evaluate-link-margins.js';
+export type { LinkMarginField, LinkMarginColumns } from './budget/evaluate-link-margins.js';

@@ -245,7 +245,7 @@ function hiddenPointingOutageRising(
  * True when every number the chain reads is a number (a missing required field resolves to
  * undefined). A dozen typeof checks: cheap enough for the hot path, unlike a schema parse.
  */
-function hasEveryRequiredNumber(design: ResolvedDesign): boolean {
+export function hasEveryRequiredNumber(design: ResolvedDesign): boolean {
   return (
     typeof design.rangeM === 'number' &&
     typeof design.wavelengthM === 'number' &&
@@ -267,15 +267,39 @@ function hasEveryRequiredNumber(design: ResolvedDesign): boolean {
   );
 }
 
+/** The sum of the numbers the chain reads: finite exactly when each of them is (for the designs the schema accepts). */
+export function sumOfInputs(design: ResolvedDesign): number {
+  return (
+    design.rangeM +
+    design.wavelengthM +
+    design.powerDbm +
+    design.apertureBeamRadiusM +
+    design.halfAngleDivergenceRad +
+    design.m2 +
+    design.transmitOpticsLossDb +
+    design.apertureDiameterM +
+    design.obscurationRatio +
+    design.sensitivityDbm +
+    design.receiveOpticsLossDb +
+    design.jitterSigmaPerAxisRad +
+    design.staticErrorRad +
+    design.visibility2PercentKm +
+    design.cn2 +
+    design.fadeProbability +
+    design.systemMarginDb
+  );
+}
+
 /**
  * The error for a design the engine cannot evaluate: the schema's own issues, so the message names
  * each field ("rangeM: is required"). Only reached on failure, so the parse costs nothing otherwise.
+ * `context` starts the message (the entry, and for a batch the point).
  */
-function invalidDesignError(design: unknown): RangeError {
+export function invalidDesignError(design: unknown, context = 'evaluateLink'): RangeError {
   const result = LinkDesignSchema.safeParse(design);
   const issues = result.success ? [] : formatZodIssues(result.error);
   const detail = issues.length > 0 ? issues.map((issue) => `${issue.path || 'design'}: ${issue.message}`).join('; ') : 'the design is not valid';
-  return new RangeError(`evaluateLink: ${detail}`);
+  return new RangeError(`${context}: ${detail}`);
 }
 
 /**
@@ -315,6 +339,9 @@ const workspace = { design: emptyResolvedDesign(), chain: newChainResult(), inUs
 function budgetOf(design: LinkDesignInput, workDesign: ResolvedDesign, workChain: ChainResult): LinkBudget {
   const resolved = resolveDesignInto(workDesign, design);
   if (!hasEveryRequiredNumber(resolved)) throw invalidDesignError(design);
+  // NaN or ±Infinity anywhere makes the sum non-finite: name the field before a model's own guard
+  // (e.g. the beam-wave scintillation's) reports an internal quantity instead.
+  if (!Number.isFinite(sumOfInputs(resolved)) && !LinkDesignSchema.safeParse(design).success) throw invalidDesignError(design);
   const attenuation = specificAttenuationDbPerKm(resolved, resolved.visibility2PercentKm);
   const chain = evaluateChainInto(workChain, resolved, resolved.rangeM, attenuation, resolved.includeScintillation, 'report');
   // NaN or ±Infinity in an input the typeof check let through (the schema rejects both) shows in

@@ -69,7 +69,7 @@ export interface ResolvedDesign {
  * jitter σθ: the exact root of Q1(θb/σθ, r_p/σθ) = p (range-free: bias and jitter both scale with L).
  * @see Marcum J.I. (1960); ricianOutageRadius.
  */
-function outageAngleRad(jitterSigmaPerAxisRad: number, staticErrorRad: number, outageProbability: number): number {
+export function outageAngleRad(jitterSigmaPerAxisRad: number, staticErrorRad: number, outageProbability: number): number {
   if (jitterSigmaPerAxisRad > 0 && staticErrorRad / jitterSigmaPerAxisRad > LARGE_OFFSET_OVER_SIGMA) {
     // A bias of very many σ: R = |ν + x + i·y| ≈ ν + x + y²/(2ν) − x·y²/(2ν²), whose p-quantile is
     // r_p ≈ ν + σz + σ²/(2ν) − σ³z/(4ν²) with z = −Φ⁻¹(p) (derived: y² at its mean in the third
@@ -90,7 +90,7 @@ const LARGE_OFFSET_OVER_SIGMA = 1000;
  * c = 0.11478λ + 3.8367, radiation c = 0.18126λ² + 0.13709λ + 3.7502; 0 for the other models.
  * @see Al Naboulsi M., Sizun H., de Fornel F., Opt. Eng. 43(2), 319–329 (2004).
  */
-function alNaboulsiNumerator(model: AtmosphereModel, wavelengthM: number): number {
+export function alNaboulsiNumerator(model: AtmosphereModel, wavelengthM: number): number {
   const fogType = model === 'al-naboulsi-advection' ? 'advection' : model === 'al-naboulsi-radiation' ? 'radiation' : undefined;
   // β·V at V = 1 km from the atmosphere module, so the coefficients live in one place.
   return fogType === undefined ? 0 : alNaboulsiFogExtinctionPerKm({ fogType, visibilityM: 1000, wavelengthM });
@@ -240,6 +240,8 @@ export interface ChainResult {
   atmosphericLossDb: number;
   /** NaN at detail 'margin' */
   pointingLossDb: number;
+  /** the three terms the capture and the pointing make together: L_geo + spread + L_point [dB] (every detail) */
+  captureAndPointingLossDb: number;
   receivedPowerDbm: number;
   rytovVarianceSpherical: number;
   scintillationIndex: number;
@@ -265,6 +267,7 @@ export function newChainResult(): ChainResult {
     geometricLossDb: Number.NaN,
     atmosphericLossDb: Number.NaN,
     pointingLossDb: Number.NaN,
+    captureAndPointingLossDb: Number.NaN,
     receivedPowerDbm: Number.NaN,
     rytovVarianceSpherical: Number.NaN,
     scintillationIndex: Number.NaN,
@@ -330,6 +333,7 @@ export function evaluateChainInto(out: ChainResult, design: ResolvedDesign, rang
       ? -DB_PER_NEPER_POWER * logMeanAnnularCapture(captureBeamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM)
       : centredGeometricLossDb(captureBeamRadiusM, apertureRadiusM, obscurationRadiusM) +
         exactOutagePointingLossAtRadiusDb(captureBeamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM, design.pointingOutageProbability, design.pointingOutageAngleRad * rangeM);
+    out.captureAndPointingLossDb = captureAndPointingLossDb;
     receivedPowerDbm = design.powerDbm - design.transmitOpticsLossDb - captureAndPointingLossDb - atmosphericLossDb - design.receiveOpticsLossDb;
   } else {
     const geometricLossDb = centredGeometricLossDb(beamRadiusM, apertureRadiusM, obscurationRadiusM);
@@ -347,6 +351,7 @@ export function evaluateChainInto(out: ChainResult, design: ResolvedDesign, rang
     out.turbulenceBeamSpreadLossDb = turbulenceBeamSpreadLossDb;
     out.pointingLossDb = pointingLossDb;
     out.captureFraction = annularCaptureFractionStable(beamRadiusM, apertureRadiusM, obscurationRadiusM);
+    out.captureAndPointingLossDb = geometricLossDb + turbulenceBeamSpreadLossDb + pointingLossDb;
     receivedPowerDbm =
       design.powerDbm - design.transmitOpticsLossDb - geometricLossDb - turbulenceBeamSpreadLossDb - atmosphericLossDb - pointingLossDb - design.receiveOpticsLossDb;
   }
