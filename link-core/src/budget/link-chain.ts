@@ -183,8 +183,21 @@ export function resolveDesignInto(target: ResolvedDesign, design: LinkDesignInpu
  * @see Kim, McArthur & Korevaar, Proc. SPIE 4214 (2001); Kruse et al. (1962).
  */
 export function specificAttenuationDbPerKm(design: ResolvedDesign, visibility2PercentKm: number): number {
-  if (design.fogNumeratorPerKm > 0) return (DB_PER_NEPER_POWER * design.fogNumeratorPerKm) / visibility2PercentKm;
-  return DB_PER_NEPER_POWER * visibilityExtinctionPerKmOfLogWavelength(design.kruse, visibility2PercentKm, design.logWavelengthRatio);
+  return specificAttenuationOfModelDbPerKm(design.fogNumeratorPerKm, design.kruse, design.logWavelengthRatio, visibility2PercentKm);
+}
+
+/**
+ * {@link specificAttenuationDbPerKm} from the model's numbers (the batch kernel's columns).
+ * @param fogNumeratorPerKm Al Naboulsi's c(λ) of β = c/V, or 0 for Kim/Kruse
+ * @param kruse Kruse's exponent (Kim's otherwise)
+ * @param logWavelengthRatio ln(λ/550 nm)
+ * @param visibility2PercentKm 2 % visibility [km], > 0
+ * @returns γ [dB/km]
+ * @see Kim, McArthur & Korevaar, Proc. SPIE 4214 (2001); Kruse et al. (1962); Al Naboulsi et al. (2004).
+ */
+export function specificAttenuationOfModelDbPerKm(fogNumeratorPerKm: number, kruse: boolean, logWavelengthRatio: number, visibility2PercentKm: number): number {
+  if (fogNumeratorPerKm > 0) return (DB_PER_NEPER_POWER * fogNumeratorPerKm) / visibility2PercentKm;
+  return DB_PER_NEPER_POWER * visibilityExtinctionPerKmOfLogWavelength(kruse, visibility2PercentKm, logWavelengthRatio);
 }
 
 /**
