@@ -88,6 +88,9 @@ export function ricianOutageRadiusOverSigmaWithin(offsetOverSigma: number, outag
     const density = r * Math.exp(-0.5 * (r - offsetOverSigma) * (r - offsetOverSigma)) * besselI0Scaled(offsetOverSigma * r);
     const slope = -density / Math.exp(residual + logP);
     let next = r - residual / slope;
+    // A Newton step this small is the root (it may land on the bracket's end, which r just became:
+    // test before the bisection fallback, which would otherwise halve the whole bracket again).
+    if (Math.abs(next - r) <= 1e-13 * r) return next;
     if (!(next > low && next < high)) next = 0.5 * (low + high);
     if (Math.abs(next - r) <= 1e-13 * r || high - low <= 1e-13 * high) return next;
     r = next;
