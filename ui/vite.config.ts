@@ -25,6 +25,8 @@ export default defineConfig({
   },
   // The server replaces this placeholder with a fresh nonce per response (its CSP admits it).
   html: { cspNonce: 'BEAMWRIGHT_CSP_NONCE' },
+  // the sweep worker imports link-core's shared chunks: module workers, like the app
+  worker: { format: 'es' },
   build: {
     outDir: 'dist',
     // No data: URLs for fonts or images: the CSP admits only the app's own origin for them.

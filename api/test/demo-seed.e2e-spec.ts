@@ -3,8 +3,8 @@ import { randomBytes } from 'node:crypto';
 import request from 'supertest';
 import { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { evaluateLink, LinkDesignSchema } from '@beamwright/link-core';
-import { LinkListResponseSchema } from '@beamwright/link-core/contracts';
+import { evaluateLink, LinkDesignSchema, type LinkDesign } from '@beamwright/link-core';
+import { LinkDetailSchema, LinkListResponseSchema } from '@beamwright/link-core/contracts';
 import { readDemoFixtures, type DemoFixtures } from '../src/database/seeds/demo-fixtures.js';
 import { seedDemo } from '../src/database/seeds/demo-seed.js';
 import { Organisation } from '../src/organisations/organisation.entity.js';
@@ -69,6 +69,24 @@ describe('demo seed (e2e)', () => {
       expect(revisions.map((revision: { revision: number }) => revision.revision)).toEqual(Array.from({ length: item.revision }, (_, index) => index + 1));
       const detail = (await request(app.getHttpServer()).get(`/api/links/${item.id}`).set(...auth).expect(200)).body;
       expect(detail.budget).toStrictEqual(JSON.parse(JSON.stringify(evaluateLink(LinkDesignSchema.parse(detail.design)))));
+      for (const variant of detail.variants) {
+        expect(variant.budget).toStrictEqual(JSON.parse(JSON.stringify(evaluateLink(LinkDesignSchema.parse(variant.design)))));
+      }
     }
+
+    // one link's latest revision carries the wavelength set: the same optics at the four usual wavelengths
+    const withSet = list.items.filter((item) => item.name === 'Harbour Office to North Water Tower');
+    expect(withSet).toHaveLength(1);
+    const detail = LinkDetailSchema.parse((await request(app.getHttpServer()).get(`/api/links/${withSet[0]!.id}`).set(...auth).expect(200)).body);
+    expect(detail.variants!.map((variant) => [variant.name, Math.round(variant.design.transmitter.wavelengthM * 1e9)])).toEqual([
+      ['785 nm', 785],
+      ['850 nm', 850],
+      ['1310 nm', 1310],
+      ['1550 nm', 1550],
+    ]);
+    const withoutWavelength = (design: LinkDesign) => ({ ...design, transmitter: { ...design.transmitter, wavelengthM: 0 } });
+    for (const variant of detail.variants!) expect(withoutWavelength(variant.design)).toEqual(withoutWavelength(detail.design));
+    const earlier = (await request(app.getHttpServer()).get(`/api/links/${detail.id}/revisions/1`).set(...auth).expect(200)).body;
+    expect(earlier.variants).toEqual([]);
   });
 });

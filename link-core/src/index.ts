@@ -1,6 +1,12 @@
 /**
- * @beamwright/link-core — the only public entry of the computation engine (plus the `./units`
- * subpath for unit parsing, kept apart so that the UI bundle only carries mathjs where it parses).
+ * @beamwright/link-core — the product entry of the computation engine: what the api and the ui
+ * need to evaluate, size and check a link (the design and budget schemas, the budget, maximum
+ * range, samplers, availability, eye safety, site geometry and the units), plus the reference
+ * functions whose names earlier releases fixed for outside callers.
+ *
+ * Other entries: `./physics` (every building block of the budget, for a specialist), `./units`
+ * (mathjs-based parsing of typed quantities, kept apart so the UI bundle carries mathjs only where
+ * it parses) and `./contracts` (the HTTP API's zod schemas and the shared workflow rules).
  * Everything is pure: no I/O, no clock, no randomness; SI units inside, dB and dBm named.
  */
 export { LINK_CORE_VERSION } from './version.js';
@@ -44,81 +50,47 @@ export { DB_PER_NATURAL_LOG_POWER, WGS84_ELLIPSOID, GRS80_ELLIPSOID, MEAN_EARTH_
 export type { Ellipsoid } from './units/constants.js';
 export { ratioToDb, dbToRatio, fractionToLossDb, wattsToDbm, dbmToWatts } from './units/decibels.js';
 
-// Gaussian beams (METHODS.md §1)
-export { rayleighRangeM, diffractionHalfAngleRad, beamRadiusFromWaistM, wavefrontRadiusFromWaistM, gouyPhaseRad, gaussianBeam } from './beam/gaussian-beam.js';
-export type { GaussianBeamInput, GaussianBeam } from './beam/gaussian-beam.js';
-export { gaussianPeakIntensityWPerM2, relativeIntensity, gaussianIntensityWPerM2, encircledPowerFraction } from './beam/intensity.js';
-export { andrewsPhillipsBeamParameters, defocusedLaunch, launchBeamRadiusAtRangeM, beamRadiusAtRangeM, linearSpotRadiusM, quadratureSpotRadiusM } from './beam/launch.js';
-export type { LaunchedBeamInput, AndrewsPhillipsParameters, DefocusedLaunchInput, DefocusedLaunch, BeamRadiusAtRangeInput } from './beam/launch.js';
+// Eye safety (METHODS.md §8): indicative only, always shown with its caution
+export { DEFAULT_LASER_SAFETY_EDITION, normaliseLaserSafetyEdition, eyeSafetyCaution } from './safety/exposure-limits.js';
+export type { LaserSafetyEdition, LaserSafetyEditionInput } from './safety/exposure-limits.js';
+export { assessEyeSafety } from './safety/classification.js';
+export { eyeSafetyInputOf } from './safety/eye-safety-input.js';
+export type { IndicativeLaserClass, LaserClassIndication, EyeSafetyInput, EyeSafetyAssessment } from './safety/classification.js';
 
-// Transmit aperture (METHODS.md §2)
-export { truncationGainEfficiency, transmittedFraction, optimumTruncation, uniformApertureGain, truncatedGaussianGain, fraunhoferDistanceM, onAxisFarFieldIrradianceWPerM2, gaussianBeamOnAxisGain, friisPowerRatio, transmitApertureForSpot } from './transmit/truncation.js';
-export type { OptimumTruncation, TransmitApertureForSpotInput, TransmitApertureForSpot } from './transmit/truncation.js';
+// Site geometry (METHODS.md §9)
+export { linkGeometry, lineOfSightClearance } from './geometry/link-geometry.js';
+export type { Site, LinkGeometryInput, LinkGeometry, PathObstacle, ClearanceBeam, LineOfSightClearanceInput, ObstacleClearance, LineOfSightClearance } from './geometry/link-geometry.js';
+export { normaliseAzimuthDeg, geodesicInverse, formatDegreesMinutesSeconds, parseDegreesMinutesSeconds } from './geometry/geodesy.js';
+export type { GeodesicInverse } from './geometry/geodesy.js';
 
-// Receive capture (METHODS.md §3)
-export { centredCaptureFraction, annularCaptureFraction, offsetCaptureFraction, captureFraction, geometricLossDb, smallApertureCaptureApproximation, faridHranilovicCapture, faridHranilovicCaptureFraction, topHatCaptureRatio, offsetForRelativeCapture, fieldOfViewCheck, logRicianAnnulusProbability, logCentredAnnularCapture, logOffsetAnnularCapture, logMeanAnnularCapture } from './capture/capture.js';
-export { exactMeanPointingLossDb, exactOutagePointingLossDb, ricianOutageRadius, captureFallsFromCentre } from './pointing/exact-pointing.js';
-export { jointOutageProbability } from './budget/joint-outage.js';
-export type { JointOutage } from './budget/joint-outage.js';
-export type { CaptureFractionInput, FaridHranilovicCapture, TopHatCaptureInput, FieldOfViewInput, FieldOfViewCheck } from './capture/capture.js';
-
-// Pointing, jitter and building sway (METHODS.md §4)
-export { pointingOutageProbability, rayleighThresholdOverSigma, requiredThresholdOverSigma, meanPointingRelativePower, meanPointingLossDb, pointingLossDb, angularPointingLossDb, offsetForPointingLossM, pointingJitterBudget, pointingLossAtOutageDb, faridHranilovicPointingStatistics, faridHranilovicOutageProbability, combineJitterPerAxis } from './pointing/pointing.js';
-export type { PointingOutageInput, PointingJitterBudgetInput, PointingJitterBudget, FaridHranilovicPointingStatistics } from './pointing/pointing.js';
-export { buildingFundamentalFrequencyHz, buildingTiltEstimates } from './pointing/building-sway.js';
-export type { BuildingTiltInput, BuildingTiltEstimates } from './pointing/building-sway.js';
-
-// Atmospheric attenuation (METHODS.md §5)
-export { KOSCHMIEDER_CONSTANT_2_PERCENT, VISIBILITY_REFERENCE_WAVELENGTH_M, VISIBILITY_2_PERCENT_PER_MOR, koschmiederConstant, toContrast2PercentVisibilityM, kimExponent, kruseExponent, visibilityExponent, visibilityExtinctionPerKm, visibilityExtinctionPerKmFast, visibilityAttenuationDbPerKm, visibilityForAttenuationM, visibility2PercentForAttenuationKm } from './atmosphere/visibility-attenuation.js';
-export type { VisibilityModel, VisibilityAttenuationInput, VisibilityForAttenuationInput } from './atmosphere/visibility-attenuation.js';
-export { alNaboulsiFogExtinctionPerKm, alNaboulsiFogAttenuationDbPerKm, rainAttenuationDbPerKm, snowAttenuationDbPerKm, clearAirAbsorptionDbPerKm, atmosphericPathLoss } from './atmosphere/fog-and-precipitation.js';
-export type { FogType, AlNaboulsiFogInput, RainModel, SnowType, AtmosphericPathLoss } from './atmosphere/fog-and-precipitation.js';
+// Visibility classes for labels (METHODS.md §5.9)
 export { VISIBILITY_CODE, visibilityCodeClass } from './atmosphere/visibility-code.js';
 export type { VisibilityCodeClass } from './atmosphere/visibility-code.js';
 
-// Turbulence (METHODS.md §6)
-export { wavenumberRadPerM, rytovVariance, rytovVarianceFast, fresnelZoneM, coherenceRadiusM, friedParameterM, turbulenceRegime } from './turbulence/rytov.js';
-export type { WaveModel, RytovVarianceInput, CoherenceInput, TurbulenceRegime } from './turbulence/rytov.js';
-export { normalisedApertureSquared, gammaGammaParameters, scintillationIndexAllRegimes, apertureAveragedScintillationIndex, weakApertureAveraging, weakApertureAveragingNumerical, apertureAveragedFadeMarginDb, apertureAveragedScintillationIndexFast } from './turbulence/scintillation.js';
-export type { GammaGammaParameters, GammaGammaParametersInput, WeakApertureAveraging } from './turbulence/scintillation.js';
-export { GAMMA_GAMMA_LOGNORMAL_SHAPE_LIMIT, GAMMA_GAMMA_LOGNORMAL_BLEND_START, gammaGammaCdf, gammaGammaPdf, gammaGammaCdfSeries, gammaGammaQuantile, fadeMarginGammaGammaDb, fadeMarginLognormalDb, fadeMarginDb } from './turbulence/fade-statistics.js';
-export type { FadeMarginInput } from './turbulence/fade-statistics.js';
-export { GAUSSIAN_BEAM_RYTOV_FORM_RATIO, gaussianBeamRytovRatioIntegral, gaussianBeamRytovRatio, gaussianBeamRytovRatioApproximate, gaussianBeamScintillationIndex } from './turbulence/gaussian-beam-scintillation.js';
-export { collimatedBeamWander, longTermBeamRadius } from './turbulence/beam-wander.js';
-export type { BeamWander, LongTermBeamRadius } from './turbulence/beam-wander.js';
-export { beamWaveAtReceiverFast, beamWaveScintillationFast, LONG_TERM_SPREAD_BRIDGE_EXPONENT } from './turbulence/beam-wave.js';
-export type { BeamWaveAtReceiver } from './turbulence/beam-wave.js';
-
-// Receiver (METHODS.md §7)
-export { PLANCK_CONSTANT_J_S, SPEED_OF_LIGHT_M_PER_S, ELEMENTARY_CHARGE_C, qFactorForBer, berForQFactor, qFactorDb, photonEnergyJ, photonsPerBit, idealResponsivityAPerW, receiverSensitivity, checkReceivedPower } from './receiver/sensitivity.js';
-export type { ReceiverSensitivityInput, ReceiverSensitivity, ReceivedPowerVerdict } from './receiver/sensitivity.js';
-
-// Eye safety (METHODS.md §8): indicative only, always shown with its caution
-export { DEFAULT_LASER_SAFETY_EDITION, normaliseLaserSafetyEdition, eyeSafetyCaution, correctionFactorC4, correctionFactorC7, ocularMpeDetails, ocularMpeWPerM2, ocularMpeRadiantExposureJPerM2, limitingApertureDiameterM, mpePowerThroughLimitingApertureW, CLASS_3B_CW_LIMIT_W, classOneAel, classOneAelW } from './safety/exposure-limits.js';
-export type { LaserSafetyEdition, LaserSafetyEditionInput, OcularMpeInput, OcularMpeDetails, ClassOneAel } from './safety/exposure-limits.js';
-export { BINOCULAR_7X50_GAIN, viewingOpticsGain, nohdM, nohdFarFieldM, exitPeakIrradianceWPerM2 } from './safety/hazard-distance.js';
-export type { NohdInput } from './safety/hazard-distance.js';
-export { accessiblePowerW, measurementConditions, indicativeLaserClass, assessEyeSafety } from './safety/classification.js';
-export { eyeSafetyInputOf } from './safety/eye-safety-input.js';
-export type { BeamGrowthModel, AccessiblePowerInput, MeasurementCondition, IndicativeLaserClass, LaserClassInput, LaserClassIndication, EyeSafetyInput, EyeSafetyAssessment } from './safety/classification.js';
-
-// Site geometry (METHODS.md §9)
-export { linkGeometry, earthCurvature, surveyingCurvatureRefractionDropM, earthBulgeM, fresnelRadiusM, lineOfSightClearance } from './geometry/link-geometry.js';
-export type { Site, LinkGeometryInput, LinkGeometry, EarthCurvature, PathObstacle, ClearanceBeam, LineOfSightClearanceInput, ObstacleClearance, LineOfSightClearance } from './geometry/link-geometry.js';
-export { normaliseAzimuthDeg, geodesicInverse, geodeticToEcef, enuVector, formatDegreesMinutesSeconds, parseDegreesMinutesSeconds } from './geometry/geodesy.js';
-export type { GeodesicInverse, Ecef, Enu } from './geometry/geodesy.js';
-
-// Numerical building blocks
-export { noncentralChiSquare2Tails, noncentralChiSquare2TailsFast, marcumQ1, marcumQ1Complement } from './numeric/marcum-q.js';
-export type { NoncentralChiSquareTails } from './numeric/marcum-q.js';
-export { findRootBrent } from './numeric/root-finding.js';
-export type { RootFindingOptions } from './numeric/root-finding.js';
-export { integrate } from './numeric/quadrature.js';
-export type { QuadratureOptions } from './numeric/quadrature.js';
-export { besselI0Scaled } from './numeric/bessel.js';
+// Reference functions with names fixed for outside callers since the first engine release; the same
+// functions, with the rest of their families, are in `./physics`.
+export {
+  gaussianBeam,
+  captureFraction,
+  geometricLossDb,
+  optimumTruncation,
+  pointingOutageProbability,
+  pointingLossDb,
+  meanPointingLossDb,
+  visibilityAttenuationDbPerKm,
+  rytovVariance,
+  gammaGammaParameters,
+  fadeMarginDb,
+  ocularMpeWPerM2,
+  nohdM,
+  collimatedBeamWander,
+  longTermBeamRadius,
+} from './physics.js';
 
 // Link budget and availability (METHODS.md §10–§11)
 export { evaluateLink, linkMarginAtRangeDb } from './budget/evaluate-link.js';
+export { jointOutageProbability } from './budget/joint-outage.js';
+export type { JointOutage } from './budget/joint-outage.js';
 export { compareEngineVersions, currentEngineFigures, readStoredDesign, GAUSSIAN_BEAM_DEFAULT_SINCE, REQUIRED_LINK_MARGIN_DB } from './budget/engine-version.js';
 export type { CurrentEngineFigures } from './budget/engine-version.js';
 export { maxRange, maxRangeM, MAX_RANGE_SEARCH_M } from './budget/max-range.js';
@@ -140,6 +112,18 @@ export { workedExampleDesign } from './examples/worked-example.js';
 
 // A seeded uniform generator for Monte-Carlo checks and benchmarks (no unseeded randomness)
 export { seededUniform } from './numeric/seeded-random.js';
+
+// ---------------------------------------------------------------------------------------------
+// Design solvers, wavelength comparison and sweep samplers (METHODS.md §15).
+// ---------------------------------------------------------------------------------------------
+export { VARIABLE_DESIGN_FIELDS, VARIABLE_DESIGN_FIELD_UNITS, designFieldRange, designValueOf, withDesignValue, InvalidInputError } from './budget/design-fields.js';
+export type { VariableDesignField, DesignFieldRange } from './budget/design-fields.js';
+export { solveDesign, SolveDesignOptionsSchema, SOLVE_DESIGN_VARIABLES, SOLVE_DESIGN_FIELDS } from './budget/solve-design.js';
+export type { SolveDesignOptions, SolveDesignResult, SolveDesignVariable } from './budget/solve-design.js';
+export { compareWavelengths, referenceWeather, CompareWavelengthsOptionsSchema, USUAL_FSO_WAVELENGTHS_M, MAX_COMPARED_WAVELENGTHS, REFERENCE_WEATHER_CLASSES } from './budget/wavelength-comparison.js';
+export type { CompareWavelengthsOptions, ReferenceWeather, ReferenceWeatherClass, WavelengthComparison, WavelengthComparisonRow } from './budget/wavelength-comparison.js';
+export { marginSweep, marginGrid, sweepAxisValues, SweepAxisSchema, SWEEP_SPACINGS, MAX_SWEEP_POINTS, MAX_GRID_POINTS } from './budget/sweeps.js';
+export type { SweepAxis, SweepAxisValues, SweepSpacing, MarginSweep, MarginGrid } from './budget/sweeps.js';
 
 // --- Batch margin kernel (METHODS.md §10.8): margins of many variations of one design, for sweeps,
 // heat maps and solvers, without a budget object per point. Kept together at the end of the entry.

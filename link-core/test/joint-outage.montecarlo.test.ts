@@ -6,7 +6,8 @@
  * outage probability of jointOutageProbability — each inside its 4σ confidence interval.
  */
 import { describe, expect, it } from 'vitest';
-import { evaluateLink, jointOutageProbability, logMeanAnnularCapture, logOffsetAnnularCapture, logCentredAnnularCapture, type LinkDesignInput } from '../src/index.js';
+import { evaluateLink, jointOutageProbability, type LinkDesignInput } from '../src/index.js';
+import { logMeanAnnularCapture, logOffsetAnnularCapture, logCentredAnnularCapture } from '../src/physics.js';
 import { seededUniform } from '../src/numeric/seeded-random.js';
 
 const DRAWS = 1_000_000;

@@ -97,6 +97,17 @@ describe('accessibility of every screen and dialog, light and dark (axe-core)', 
     await openChartTables(page);
     await expectAccessible(page, 'workspace with the chart tables open (engineer)');
 
+    // the margin explorer: a sweep, then a heat map with its values table open
+    await page.getByTestId('results-tab-explore').click();
+    await page.getByTestId('chart-explore').locator('svg').first().waitFor();
+    await expectAccessible(page, 'workspace, margin against one input (engineer)');
+    await page.getByTestId('explore-mode-grid').click();
+    await page.waitForSelector('[data-testid="explore-result"][data-kind="grid"]');
+    await page.getByTestId('chart-explore').locator('svg').first().waitFor();
+    await page.locator('#results-panel-explore').getByRole('button', { name: /Show the values as a table/ }).click();
+    await expectAccessible(page, 'workspace, heat map with its table (engineer)');
+    await page.getByTestId('results-tab-budget').click();
+
     // a field error is tied to its field
     const pathLength = page.locator('main input[name="rangeM"]');
     const typed = await pathLength.inputValue();
@@ -232,6 +243,15 @@ describe('accessibility of every screen and dialog, light and dark (axe-core)', 
     await signIn(page, 'reviewer@demo.test');
     await page.getByTestId('links-table').waitFor();
     await expectAccessible(page, 'links list (reviewer)');
+
+    await openLinkByName(page, 'Harbour Office to North Water Tower');
+    await page.getByTestId('design-readout').waitFor();
+    await page.getByTestId('results-tab-alternatives').click();
+    await page.getByTestId('variant-comparison').waitFor();
+    await page.getByTestId('chart-wavelengths').locator('svg').first().waitFor();
+    // the best of a row and what differs are said in words too, not by the star or the tint alone
+    assert.match(await textOf(page.getByTestId('variant-comparison').locator('[data-best]').first()), /best/);
+    await expectAccessible(page, 'alternatives side by side and the wavelength comparison (reviewer)');
 
     await openLinkByName(page, 'Depot to North Water Tower');
     await page.getByTestId('design-readout').waitFor();

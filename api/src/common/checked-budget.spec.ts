@@ -42,6 +42,16 @@ describe('checkedBudget', () => {
     expect(body.issues).toHaveLength(3);
   });
 
+  it("names a variant's budget by the path it is given", () => {
+    let thrown: unknown;
+    try {
+      checkedBudget({ ...evaluateLink(design), linkMarginDb: Number.NaN }, 'variants.2.budget');
+    } catch (error) {
+      thrown = error;
+    }
+    expect(toErrorBody(thrown).issues).toEqual([{ path: 'variants.2.budget.linkMarginDb', message: 'must be a finite number' }]);
+  });
+
   it('refuses NaN as well', () => {
     expect(() => checkedBudget({ ...evaluateLink(design), receivedPowerDbm: Number.NaN })).toThrow(UnprocessableEntityException);
   });

@@ -7,6 +7,7 @@ import type {
   ReviewEntry,
   Revision,
   RevisionSummary,
+  RevisionVariant,
   SiteRef,
   UserRef,
 } from '@beamwright/link-core/contracts';
@@ -14,6 +15,7 @@ import type { Site } from '../sites/site.entity.js';
 import type { User } from '../users/user.entity.js';
 import type { LinkReview } from './link-review.entity.js';
 import type { LinkRevision } from './link-revision.entity.js';
+import type { LinkRevisionVariant } from './link-revision-variant.entity.js';
 import type { Link } from './link.entity.js';
 
 export function toUserRef(user: User | undefined, fallbackId: string): UserRef {
@@ -55,8 +57,20 @@ export function toLinkSummary(link: Link, latest?: LinkRevision): LinkSummary {
   };
 }
 
-/** Needs the revision's `author` loaded. */
-export function toRevision(revision: LinkRevision, approval: Approval | null): Revision {
+/** A stored variant, read like its revision: the stored budget, the current engine's margin beside an older one. */
+export function toRevisionVariant(variant: LinkRevisionVariant): RevisionVariant {
+  return {
+    index: variant.position,
+    name: variant.name,
+    design: variant.design,
+    budget: variant.budget,
+    linkCoreVersion: variant.linkCoreVersion,
+    currentEngine: currentEngineFigures(variant.design, variant.linkCoreVersion, variant.budget.linkMarginDb),
+  };
+}
+
+/** Needs the revision's `author` loaded; `variants` are the revision's, in position order. */
+export function toRevision(revision: LinkRevision, approval: Approval | null, variants: readonly LinkRevisionVariant[]): Revision {
   return {
     linkId: revision.linkId,
     revision: revision.revisionNumber,
@@ -69,24 +83,29 @@ export function toRevision(revision: LinkRevision, approval: Approval | null): R
     author: toUserRef(revision.author, revision.authorId),
     createdAt: revision.createdAt.toISOString(),
     approval,
+    variants: variants.map(toRevisionVariant),
   };
 }
 
-export function toRevisionSummary(revision: LinkRevision, approval: Approval | null): RevisionSummary {
-  const { design: _design, budget: _budget, ...rest } = toRevision(revision, approval);
+export function toRevisionSummary(revision: LinkRevision, approval: Approval | null, variantCount: number): RevisionSummary {
+  const { design: _design, budget: _budget, variants: _variants, ...rest } = toRevision(revision, approval, []);
   return {
     ...rest,
     linkMarginDb: revision.budget.linkMarginDb,
     receivedPowerDbm: revision.budget.receivedPowerDbm,
     rangeM: revision.design.rangeM,
     wavelengthM: revision.design.transmitter.wavelengthM,
+    variantCount,
   };
 }
 
-/** `approval` is the latest revision's; it shows only while the link is approved or installed. */
-export function toLinkDetail(link: Link, latest: LinkRevision, approval: Approval | null, wasApproved: boolean): LinkDetail {
+/**
+ * `approval` is the latest revision's; it shows only while the link is approved or installed.
+ * `variants` are the latest revision's.
+ */
+export function toLinkDetail(link: Link, latest: LinkRevision, approval: Approval | null, wasApproved: boolean, variants: readonly LinkRevisionVariant[]): LinkDetail {
   const current = link.status === 'approved' || link.status === 'installed' ? approval : null;
-  const revision = toRevision(latest, current);
+  const revision = toRevision(latest, current, variants);
   return {
     ...toLinkSummary(link),
     design: revision.design,
@@ -98,6 +117,7 @@ export function toLinkDetail(link: Link, latest: LinkRevision, approval: Approva
     revisedAt: revision.createdAt,
     approval: current,
     wasApproved,
+    variants: revision.variants,
   };
 }
 

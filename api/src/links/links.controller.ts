@@ -1,11 +1,26 @@
 import { Body, Controller, Delete, Get, HttpCode, HttpStatus, Param, Patch, Post, Query } from '@nestjs/common';
-import { ApiBearerAuth, ApiBody, ApiConflictResponse, ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiQuery, ApiTags } from '@nestjs/swagger';
+import {
+  ApiBadRequestResponse,
+  ApiBearerAuth,
+  ApiBody,
+  ApiConflictResponse,
+  ApiCreatedResponse,
+  ApiNoContentResponse,
+  ApiNotFoundResponse,
+  ApiOkResponse,
+  ApiQuery,
+  ApiTags,
+  ApiUnprocessableEntityResponse,
+} from '@nestjs/swagger';
 import {
   CreateLinkRequestSchema,
   CreateRevisionRequestSchema,
+  ErrorBodySchema,
   LinkDetailSchema,
   LinkListQuerySchema,
   LinkListResponseSchema,
+  MAX_VARIANTS_PER_REVISION,
+  PromoteVariantRequestSchema,
   ReturnRevisionRequestSchema,
   ReviewActionResponseSchema,
   ReviewCommentRequestSchema,
@@ -29,6 +44,7 @@ import type { AuthUser } from '../common/auth-user.js';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { RolesFor } from '../common/decorators/roles.decorator.js';
 import { openApiSchema } from '../common/openapi/zod-openapi.js';
+import { ListIndexParamPipe } from '../common/pipes/list-index-param.pipe.js';
 import { PositiveIntParamPipe } from '../common/pipes/positive-int-param.pipe.js';
 import { uuidParam } from '../common/pipes/uuid-param.pipe.js';
 import { ZodValidationPipe } from '../common/pipes/zod-validation.pipe.js';
@@ -36,6 +52,7 @@ import { LinksService } from './links.service.js';
 import { ReviewsService } from './reviews.service.js';
 
 const revisionParam = () => new PositiveIntParamPipe('revision');
+const variantIndexParam = () => new ListIndexParamPipe('index', MAX_VARIANTS_PER_REVISION - 1);
 
 @ApiTags('links')
 @ApiBearerAuth()
@@ -119,6 +136,7 @@ export class LinksController {
   @RolesFor('link.revise')
   @ApiBody({ schema: openApiSchema(CreateRevisionRequestSchema) })
   @ApiCreatedResponse({ schema: openApiSchema(LinkDetailSchema, 'output') })
+  @ApiBadRequestResponse({ description: 'a field is invalid; a variant\'s field is named by its index, e.g. variants.2.design.transmitter.wavelengthM', schema: openApiSchema(ErrorBodySchema, 'output') })
   @ApiConflictResponse({ description: 'baseRevision is not the latest', schema: openApiSchema(RevisionConflictBodySchema, 'output') })
   createRevision(
     @CurrentUser() caller: AuthUser,
@@ -132,6 +150,26 @@ export class LinksController {
   @ApiOkResponse({ schema: openApiSchema(RevisionSchema, 'output') })
   getRevision(@CurrentUser() caller: AuthUser, @Param('id', uuidParam()) id: string, @Param('revision', revisionParam()) revision: number): Promise<Revision> {
     return this.links.getRevision(caller, id, revision);
+  }
+
+  @Post(':id/revisions/:revision/variants/:index/promote')
+  @RolesFor('variant.promote')
+  @ApiBody({ schema: openApiSchema(PromoteVariantRequestSchema), required: false })
+  @ApiCreatedResponse({
+    description: 'revision n+1: the variant\'s design, the other designs (the former one in the promoted variant\'s place) as its variants; the link is a draft again',
+    schema: openApiSchema(LinkDetailSchema, 'output'),
+  })
+  @ApiNotFoundResponse({ description: 'no such link, revision or variant' })
+  @ApiConflictResponse({ description: 'revision n is not the latest (the body holds the latest), or the link is archived', schema: openApiSchema(RevisionConflictBodySchema, 'output') })
+  @ApiUnprocessableEntityResponse({ description: 'a stored design no longer passes the design checks, or a budget could not be computed; nothing was saved' })
+  promoteVariant(
+    @CurrentUser() caller: AuthUser,
+    @Param('id', uuidParam()) id: string,
+    @Param('revision', revisionParam()) revision: number,
+    @Param('index', variantIndexParam()) index: number,
+    @Body(new ZodValidationPipe(PromoteVariantRequestSchema)) body: z.output<typeof PromoteVariantRequestSchema>,
+  ): Promise<LinkDetail> {
+    return this.links.promoteVariant(caller, id, revision, index, body);
   }
 
   @Get(':id/diff')

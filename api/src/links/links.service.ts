@@ -1,4 +1,4 @@
-import { BadRequestException, ConflictException, ForbiddenException, Injectable, NotFoundException, type OnModuleInit } from '@nestjs/common';
+import { BadRequestException, ConflictException, ForbiddenException, Injectable, NotFoundException, UnprocessableEntityException, type OnModuleInit } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import { Brackets, DataSource, In, Repository, type EntityManager } from 'typeorm';
 import type {
@@ -8,27 +8,48 @@ import type {
   LinkDetail,
   LinkListQuerySchema,
   LinkListResponse,
+  PromoteVariantRequestSchema,
   Revision,
   RevisionDiffResponse,
   RevisionListResponse,
   UpdateLinkRequestSchema,
 } from '@beamwright/link-core/contracts';
-import { diffDesigns, isDeletableLink, linkChangeOutcome, type LinkStatus, type TrailAction } from '@beamwright/link-core/contracts';
+import { formatZodIssues, LinkDesignSchema, readStoredDesign, type LinkDesign } from '@beamwright/link-core';
+import {
+  diffDesigns,
+  formerPrimaryVariantName,
+  isDeletableLink,
+  linkChangeOutcome,
+  uniqueVariantName,
+  variantNameKey,
+  type LinkStatus,
+  type TrailAction,
+} from '@beamwright/link-core/contracts';
 import type { z } from 'zod';
 import type { AuthUser } from '../common/auth-user.js';
 import { postgresErrorCode, UNIQUE_VIOLATION } from '../common/database-errors.js';
 import type { Site } from '../sites/site.entity.js';
 import { SitesService, type SiteGeometryChange } from '../sites/sites.service.js';
-import { computeBudget } from './link-budget.js';
+import { computeBudget, computeVariantBudgets, type VariantRow } from './link-budget.js';
 import { latestRevisionColumns } from './latest-revision-columns.js';
 import { approvalFrom, toLinkDetail, toLinkSummary, toRevision, toRevisionSummary } from './link.mapper.js';
 import { LinkReview } from './link-review.entity.js';
 import { LinkRevision } from './link-revision.entity.js';
+import { LinkRevisionVariant } from './link-revision-variant.entity.js';
 import { Link } from './link.entity.js';
 
 type CreateLinkInput = z.output<typeof CreateLinkRequestSchema>;
 type CreateRevisionInput = z.output<typeof CreateRevisionRequestSchema>;
 type UpdateLinkInput = z.output<typeof UpdateLinkRequestSchema>;
+type PromoteVariantInput = z.output<typeof PromoteVariantRequestSchema>;
+
+/** What a save writes: revision base+1 with its design, note and variants (budgets computed). */
+interface NextRevision {
+  baseRevision: number;
+  design: LinkDesign;
+  note: string;
+  variants: VariantRow[];
+}
 type LinkListQuery = z.output<typeof LinkListQuerySchema>;
 
 const SORT_COLUMNS: Record<LinkListQuery['sort'], string> = {
@@ -66,6 +87,7 @@ export class LinksService implements OnModuleInit {
     @InjectDataSource() private readonly dataSource: DataSource,
     @InjectRepository(Link) private readonly links: Repository<Link>,
     @InjectRepository(LinkRevision) private readonly revisions: Repository<LinkRevision>,
+    @InjectRepository(LinkRevisionVariant) private readonly variants: Repository<LinkRevisionVariant>,
     @InjectRepository(LinkReview) private readonly reviews: Repository<LinkReview>,
     private readonly sites: SitesService,
   ) {}
@@ -119,17 +141,19 @@ export class LinksService implements OnModuleInit {
 
   async get(caller: AuthUser, id: string): Promise<LinkDetail> {
     const link = await this.findOwnedLink(caller, id);
-    const [latest, approval, wasApproved] = await Promise.all([
+    const [latest, approval, wasApproved, variants] = await Promise.all([
       this.findRevision(link.id, link.latestRevision),
       this.findApproval(link.id, link.latestRevision),
       this.reviews.exists({ where: { linkId: link.id, action: 'approve' } }),
+      this.findVariants(link.id, link.latestRevision),
     ]);
-    return toLinkDetail(link, latest, approval, wasApproved);
+    return toLinkDetail(link, latest, approval, wasApproved, variants);
   }
 
   async create(caller: AuthUser, input: CreateLinkInput): Promise<LinkDetail> {
     await this.checkSites(caller, input.siteAId ?? null, input.siteBId ?? null);
     const { budget, linkCoreVersion } = computeBudget(input.design);
+    const variants = computeVariantBudgets(input.variants);
     const linkId = await this.dataSource.transaction(async (manager) => {
       const link = await manager.save(
         manager.create(Link, {
@@ -143,15 +167,11 @@ export class LinksService implements OnModuleInit {
           ...latestRevisionColumns(input.design, budget),
         }),
       );
-      await manager.insert(LinkRevision, {
-        linkId: link.id,
-        revisionNumber: 1,
-        design: input.design,
-        budget,
-        linkCoreVersion,
-        note: input.note,
-        authorId: caller.userId,
-      });
+      await this.insertRevision(
+        manager,
+        { linkId: link.id, revisionNumber: 1, design: input.design, budget, linkCoreVersion, note: input.note, authorId: caller.userId },
+        variants,
+      );
       return link.id;
     });
     return this.get(caller, linkId);
@@ -271,16 +291,77 @@ export class LinksService implements OnModuleInit {
     }
   }
 
-  /**
-   * Saves revision base+1. The link row's `latest_revision` is advanced by a conditional UPDATE
-   * (… WHERE latest_revision = base) inside the transaction that inserts the revision: PostgreSQL
-   * locks the row, so of concurrent saves on one base exactly one matches; the others see the
-   * advanced counter once the winner commits, match nothing and get a 409. The unique
-   * (link_id, revision_number) constraint backs this up.
-   */
+  /** Saves revision base+1 with the body's design, note and variants (see saveRevision). */
   async createRevision(caller: AuthUser, id: string, input: CreateRevisionInput): Promise<LinkDetail> {
     this.refuseIfArchived(await this.findOwnedLink(caller, id), 'revised');
-    const { budget, linkCoreVersion } = computeBudget(input.design);
+    return this.saveRevision(caller, id, { baseRevision: input.baseRevision, design: input.design, note: input.note, variants: computeVariantBudgets(input.variants) });
+  }
+
+  /**
+   * Promotes variant `index` of revision `revisionNumber`: saves revision n+1 whose design is the
+   * variant's, carrying the other designs as its variants; the former design takes the promoted
+   * variant's place in the list, under `primaryName` or "Primary of revision n". Revision n is the
+   * base, so it must be the latest (409 otherwise, as for any save); the link goes back to draft.
+   * Stored designs are read as the engine that stored them meant them (readStoredDesign) and their
+   * budgets computed afresh by the current engine, as for any new revision.
+   */
+  async promoteVariant(caller: AuthUser, id: string, revisionNumber: number, index: number, input: PromoteVariantInput): Promise<LinkDetail> {
+    const link = await this.findOwnedLink(caller, id);
+    this.refuseIfArchived(link, 'revised');
+    const [revision, variants] = await Promise.all([this.findRevision(link.id, revisionNumber), this.findVariants(link.id, revisionNumber)]);
+    const promoted = variants.find((variant) => variant.position === index);
+    if (!promoted) {
+      throw new NotFoundException(
+        `Revision ${revisionNumber} has no variant ${index}: ${variants.length === 0 ? 'it has none' : `its variants are numbered 0 to ${variants.length - 1}`}`,
+      );
+    }
+    if (revisionNumber !== link.latestRevision) throw await this.staleBaseConflict(caller, link.id, revisionNumber);
+    const others = variants.filter((variant) => variant !== promoted);
+    if (input.primaryName !== undefined) {
+      const clash = others.find((variant) => variantNameKey(variant.name) === variantNameKey(input.primaryName!));
+      if (clash) {
+        const message = `must differ from the name of variant ${clash.position} ("${clash.name}"); names are compared regardless of case`;
+        throw new BadRequestException({ message: `primaryName ${message}`, issues: [{ path: 'primaryName', message }] });
+      }
+    }
+    const primaryName = input.primaryName ?? uniqueVariantName(formerPrimaryVariantName(revisionNumber), others.map((variant) => variant.name));
+    const design = this.promotableDesign(revisionNumber, `variants.${index}.design`, readStoredDesign(promoted.design, promoted.linkCoreVersion));
+    const formerPrimary = this.promotableDesign(revisionNumber, 'design', readStoredDesign(revision.design, revision.linkCoreVersion));
+    const nextVariants = variants.map((variant) =>
+      variant === promoted
+        ? { name: primaryName, design: formerPrimary }
+        : { name: variant.name, design: this.promotableDesign(revisionNumber, `variants.${variant.position}.design`, readStoredDesign(variant.design, variant.linkCoreVersion)) },
+    );
+    const note =
+      input.note ?? `Promoted the variant "${promoted.name}" of revision ${revisionNumber}; the design of revision ${revisionNumber} is kept as the variant "${primaryName}".`;
+    return this.saveRevision(caller, link.id, { baseRevision: revisionNumber, design, note, variants: computeVariantBudgets(nextVariants) });
+  }
+
+  /**
+   * A stored design checked against today's LinkDesignSchema before it is saved again: one a later
+   * schema refuses is a 422 naming the stored field (`variants.2.design.rangeM` of revision n), so a
+   * promotion never writes a design a plain save would refuse.
+   */
+  private promotableDesign(revisionNumber: number, path: string, stored: LinkDesign): LinkDesign {
+    const result = LinkDesignSchema.safeParse(stored);
+    if (result.success) return result.data;
+    const issues = formatZodIssues(result.error).map((issue) => ({ path: issue.path ? `${path}.${issue.path}` : path, message: issue.message }));
+    throw new UnprocessableEntityException({
+      message: `The stored ${path} of revision ${revisionNumber} no longer passes the design checks (${issues[0]!.path} ${issues[0]!.message}); nothing was saved. Correct it and save a revision instead.`,
+      issues,
+    });
+  }
+
+  /**
+   * Saves revision base+1. The link row's `latest_revision` is advanced by a conditional UPDATE
+   * (… WHERE latest_revision = base) inside the transaction that inserts the revision and its
+   * variants: PostgreSQL locks the row, so of concurrent saves on one base exactly one matches; the
+   * others see the advanced counter once the winner commits, match nothing and get a 409. The
+   * unique (link_id, revision_number) constraint backs this up. Every budget is computed before the
+   * transaction opens, so a refused one (422) writes nothing.
+   */
+  private async saveRevision(caller: AuthUser, id: string, next: NextRevision): Promise<LinkDetail> {
+    const { budget, linkCoreVersion } = computeBudget(next.design);
     try {
       await this.dataSource.transaction(async (manager) => {
         const result = await manager
@@ -289,50 +370,62 @@ export class LinksService implements OnModuleInit {
           .set({
             latestRevision: () => 'latest_revision + 1',
             status: 'draft',
-            ...latestRevisionColumns(input.design, budget),
+            ...latestRevisionColumns(next.design, budget),
           })
           .where('id = :id AND organisation_id = :organisationId AND latest_revision = :base', {
             id,
             organisationId: caller.organisationId,
-            base: input.baseRevision,
+            base: next.baseRevision,
           })
           .returning('latest_revision')
           .execute();
         const rows = result.raw as { latest_revision: number }[];
         if (rows.length !== 1) throw new StaleBaseRevision();
-        await manager.insert(LinkRevision, {
-          linkId: id,
-          revisionNumber: rows[0]!.latest_revision,
-          design: input.design,
-          budget,
-          linkCoreVersion,
-          note: input.note,
-          authorId: caller.userId,
-        });
+        await this.insertRevision(
+          manager,
+          { linkId: id, revisionNumber: rows[0]!.latest_revision, design: next.design, budget, linkCoreVersion, note: next.note, authorId: caller.userId },
+          next.variants,
+        );
       });
     } catch (error) {
       if (error instanceof StaleBaseRevision || postgresErrorCode(error) === UNIQUE_VIOLATION) {
-        throw await this.staleBaseConflict(caller, id, input.baseRevision);
+        throw await this.staleBaseConflict(caller, id, next.baseRevision);
       }
       throw error;
     }
     return this.get(caller, id);
   }
 
+  /** Inserts a revision and its variants, inside the caller's transaction. */
+  private async insertRevision(
+    manager: EntityManager,
+    revision: Pick<LinkRevision, 'linkId' | 'revisionNumber' | 'design' | 'budget' | 'linkCoreVersion' | 'note' | 'authorId'>,
+    variants: readonly VariantRow[],
+  ): Promise<void> {
+    const inserted = await manager.insert(LinkRevision, revision);
+    const revisionId = (inserted.identifiers[0] as { id: string }).id;
+    if (variants.length > 0) await manager.insert(LinkRevisionVariant, variants.map((variant) => ({ ...variant, revisionId })));
+  }
+
   async listRevisions(caller: AuthUser, id: string): Promise<RevisionListResponse> {
     const link = await this.findOwnedLink(caller, id);
-    const [rows, approvals] = await Promise.all([
+    const [rows, approvals, variantCounts] = await Promise.all([
       this.revisions.find({ where: { linkId: link.id }, relations: { author: true }, order: { revisionNumber: 'ASC' } }),
       this.reviews.find({ where: { linkId: link.id, action: 'approve' }, relations: { actor: true } }),
+      this.countVariants(link.id),
     ]);
     const approvalByRevision = new Map(approvals.map((review) => [review.revisionNumber, approvalFrom(review)]));
-    return { items: rows.map((row) => toRevisionSummary(row, approvalByRevision.get(row.revisionNumber) ?? null)) };
+    return { items: rows.map((row) => toRevisionSummary(row, approvalByRevision.get(row.revisionNumber) ?? null, variantCounts.get(row.id) ?? 0)) };
   }
 
   async getRevision(caller: AuthUser, id: string, revisionNumber: number): Promise<Revision> {
     const link = await this.findOwnedLink(caller, id);
-    const revision = await this.findRevision(link.id, revisionNumber);
-    return toRevision(revision, await this.findApproval(link.id, revisionNumber));
+    const [revision, approval, variants] = await Promise.all([
+      this.findRevision(link.id, revisionNumber),
+      this.findApproval(link.id, revisionNumber),
+      this.findVariants(link.id, revisionNumber),
+    ]);
+    return toRevision(revision, approval, variants);
   }
 
   async diff(caller: AuthUser, id: string, from: number, to: number): Promise<RevisionDiffResponse> {
@@ -357,6 +450,24 @@ export class LinksService implements OnModuleInit {
     return revision;
   }
 
+  /** The variants of a revision in their order (none for a revision without, or one that does not exist). */
+  async findVariants(linkId: string, revisionNumber: number): Promise<LinkRevisionVariant[]> {
+    return this.variants.find({ where: { revision: { linkId, revisionNumber } }, order: { position: 'ASC' } });
+  }
+
+  /** How many variants each revision of a link carries, by revision id (revisions without are absent). */
+  private async countVariants(linkId: string): Promise<Map<string, number>> {
+    const rows = await this.variants
+      .createQueryBuilder('variant')
+      .innerJoin('variant.revision', 'revision')
+      .select('variant.revisionId', 'revisionId')
+      .addSelect('COUNT(*)::int', 'count')
+      .where('revision.linkId = :linkId', { linkId })
+      .groupBy('variant.revisionId')
+      .getRawMany<{ revisionId: string; count: number }>();
+    return new Map(rows.map((row) => [row.revisionId, row.count]));
+  }
+
   async findApproval(linkId: string, revisionNumber: number): Promise<Approval | null> {
     const review = await this.reviews.findOne({
       where: { linkId, revisionNumber, action: 'approve' },
@@ -369,11 +480,15 @@ export class LinksService implements OnModuleInit {
   private async staleBaseConflict(caller: AuthUser, id: string, baseRevision: number): Promise<ConflictException | NotFoundException> {
     const link = await this.links.findOne({ where: { id, organisationId: caller.organisationId } });
     if (!link) return new NotFoundException('Link not found');
-    const latest = await this.findRevision(link.id, link.latestRevision);
+    const [latest, approval, variants] = await Promise.all([
+      this.findRevision(link.id, link.latestRevision),
+      this.findApproval(link.id, link.latestRevision),
+      this.findVariants(link.id, link.latestRevision),
+    ]);
     return new ConflictException({
       message: `Revision ${baseRevision} is not the latest: revision ${link.latestRevision} was saved in the meantime. Reload, re-apply your changes and save again.`,
       latestRevision: link.latestRevision,
-      latest: toRevision(latest, await this.findApproval(link.id, link.latestRevision)),
+      latest: toRevision(latest, approval, variants),
     });
   }
 

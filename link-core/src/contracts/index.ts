@@ -10,6 +10,7 @@ export * from './common.contract.js';
 export * from './sites.contract.js';
 export * from './equipment.contract.js';
 export * from './links.contract.js';
+export * from './variants.contract.js';
 export * from './reviews.contract.js';
 export * from './design-diff.js';
 export * from './workflow-rules.js';

@@ -9,6 +9,7 @@ import { LinkBudgetSchema } from '../schemas/link-budget.schema.js';
 import { UserRefSchema } from './auth.contract.js';
 import { ErrorBodySchema } from './error.contract.js';
 import { IsoDateTimeSchema, pageOf, queryInteger, textField } from './common.contract.js';
+import { VariantsRequestSchema } from './variants.contract.js';
 
 /** draft -> in_review -> approved -> installed; a new revision puts the link back to draft. */
 export const LINK_STATUSES = ['draft', 'in_review', 'approved', 'installed'] as const;
@@ -29,6 +30,8 @@ export const CreateLinkRequestSchema = z.strictObject({
   siteBId: optionalSiteId,
   /** note of revision 1 */
   note: textField({ max: 2000, multiline: true }).default(''),
+  /** named alternatives of the design, saved with revision 1 (variants.contract.ts) */
+  variants: VariantsRequestSchema,
 });
 export type CreateLinkRequest = z.input<typeof CreateLinkRequestSchema>;
 
@@ -40,6 +43,12 @@ export const CreateRevisionRequestSchema = z.strictObject({
     .min(1, 'must be at least 1'),
   design: LinkDesignSchema,
   note: textField({ max: 2000, multiline: true }).default(''),
+  /**
+   * named alternatives of the design, saved with this revision (at most 8, names unique regardless
+   * of case; variants.contract.ts). A revision carries only the variants its body sends: send the
+   * previous revision's again to keep them.
+   */
+  variants: VariantsRequestSchema,
 });
 export type CreateRevisionRequest = z.input<typeof CreateRevisionRequestSchema>;
 
@@ -130,6 +139,23 @@ export type LinkSummary = z.infer<typeof LinkSummarySchema>;
 export const LinkListResponseSchema = pageOf(LinkSummarySchema);
 export type LinkListResponse = z.infer<typeof LinkListResponseSchema>;
 
+/**
+ * One variant of a revision as stored: its design (defaults applied), the budget link-core computed
+ * for it when the revision was saved, and that engine's version, read like the revision's own.
+ */
+export const RevisionVariantSchema = z.object({
+  /** 0-based position in the revision's list (the `N` of `variants.N…` and of the promotion route) */
+  index: z.number().int().min(0),
+  name: z.string(),
+  design: LinkDesignSchema,
+  budget: LinkBudgetSchema,
+  /** link-core version that computed `budget` */
+  linkCoreVersion: z.string(),
+  /** the current engine's margin when `linkCoreVersion` is older; null otherwise */
+  currentEngine: CurrentEngineSchema.nullable(),
+});
+export type RevisionVariant = z.infer<typeof RevisionVariantSchema>;
+
 /** One immutable revision: the design as stored (defaults applied) and the budget computed at save time. */
 export const RevisionSchema = z.object({
   linkId: z.uuid(),
@@ -145,6 +171,8 @@ export const RevisionSchema = z.object({
   createdAt: IsoDateTimeSchema,
   /** who approved this revision and when; null while not approved */
   approval: ApprovalSchema.nullable(),
+  /** the revision's variants in their order, each with its stored budget (optional: added with variants; the api always sends it) */
+  variants: z.array(RevisionVariantSchema).optional(),
 });
 export type Revision = z.infer<typeof RevisionSchema>;
 
@@ -163,14 +191,18 @@ export const LinkDetailSchema = LinkSummarySchema.extend({
   approval: ApprovalSchema.nullable(),
   /** whether any revision was ever approved (a link that never was may be deleted by its owner) */
   wasApproved: z.boolean(),
+  /** the latest revision's variants (optional: added with variants; the api always sends it) */
+  variants: z.array(RevisionVariantSchema).optional(),
 });
 export type LinkDetail = z.infer<typeof LinkDetailSchema>;
 
-export const RevisionSummarySchema = RevisionSchema.omit({ design: true, budget: true }).extend({
+export const RevisionSummarySchema = RevisionSchema.omit({ design: true, budget: true, variants: true }).extend({
   linkMarginDb: z.number(),
   receivedPowerDbm: z.number(),
   rangeM: z.number(),
   wavelengthM: z.number(),
+  /** how many variants the revision carries (optional: added with variants; the api always sends it) */
+  variantCount: z.number().int().min(0).optional(),
 });
 export type RevisionSummary = z.infer<typeof RevisionSummarySchema>;
 

@@ -17,6 +17,7 @@ const EXPECTED: Record<PermissionAction, [admin: boolean, engineer: boolean, rev
   'link.create': [false, true, false, false],
   'link.update': [false, true, false, false],
   'link.revise': [false, true, false, false],
+  'variant.promote': [false, true, false, false],
   'review.submit': [false, true, false, false],
   'review.approve': [false, false, true, false],
   'review.return': [false, false, true, false],
@@ -36,6 +37,10 @@ describe('workflow rules: who may do what', () => {
       expect(row, action).toEqual(ROLES.map((role) => EXPECTED[action][['admin', 'engineer', 'reviewer', 'installer'].indexOf(role)]));
     }
     expect(isAllowed(undefined, 'link.create')).toBe(false);
+  });
+
+  it('lets exactly the roles that save a revision promote a variant (a promotion saves revision n+1)', () => {
+    expect(ROLES.filter((role) => isAllowed(role, 'variant.promote'))).toEqual(ROLES.filter((role) => isAllowed(role, 'link.revise')));
   });
 
   it('keeps every review step with one role, and the admin out of all of them', () => {

@@ -20,6 +20,8 @@ export const PERMISSIONS = {
   'link.update': ['engineer'],
   /** save a new revision of a link's design */
   'link.revise': ['engineer'],
+  /** promote a variant of the latest revision: it becomes the design of the next revision (a save, so the roles of 'link.revise') */
+  'variant.promote': ['engineer'],
   /** submit the latest revision for review */
   'review.submit': ['engineer'],
   /** approve the latest revision (never one's own) */

@@ -8,6 +8,7 @@ import { CreateEquipmentLinksRevisionsReviews1796185633635 } from './17961856336
 import { CreateRateLimitCounters1796200000000 } from './1796200000000-CreateRateLimitCounters.js';
 import { CreateUserSessionsAndDeactivation1796200100000 } from './1796200100000-CreateUserSessionsAndDeactivation.js';
 import { AddLinkArchiveAndPathChange1796300000000 } from './1796300000000-AddLinkArchiveAndPathChange.js';
+import { AddRevisionVariants1796414178325 } from './1796414178325-AddRevisionVariants.js';
 
 export const MIGRATIONS = [
   CreateOrganisationsAndUsers1796185289124,
@@ -16,4 +17,5 @@ export const MIGRATIONS = [
   CreateRateLimitCounters1796200000000,
   CreateUserSessionsAndDeactivation1796200100000,
   AddLinkArchiveAndPathChange1796300000000,
+  AddRevisionVariants1796414178325,
 ];

@@ -23,8 +23,18 @@ const EquipmentFixtureSchema = z.object({ models: z.array(CreateEquipmentRequest
 const daysAgo = z.number().min(0).max(3650);
 /** A design object; checked by LinkDesignSchema when the history is replayed (after merging changes). */
 const designObject = z.record(z.string(), z.unknown());
+/** A named alternative of the revision's design: in full, or as changes merged into the revision's design. */
+const VariantFixtureSchema = z.object({ name: z.string().min(1), design: designObject.optional(), changes: designObject.optional() });
 const HistoryEventSchema = z.discriminatedUnion('type', [
-  z.object({ type: z.literal('revision'), daysAgo, author: z.email(), note: z.string(), design: designObject.optional(), changes: designObject.optional() }),
+  z.object({
+    type: z.literal('revision'),
+    daysAgo,
+    author: z.email(),
+    note: z.string(),
+    design: designObject.optional(),
+    changes: designObject.optional(),
+    variants: z.array(VariantFixtureSchema).optional(),
+  }),
   z.object({ type: z.literal('review'), daysAgo, action: z.enum(REVIEW_ACTIONS), actor: z.email(), comment: z.string() }),
 ]);
 export type HistoryEvent = z.infer<typeof HistoryEventSchema>;

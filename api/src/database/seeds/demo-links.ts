@@ -1,9 +1,11 @@
 import type { EntityManager } from 'typeorm';
 import { evaluateLink, LINK_CORE_VERSION, LinkDesignSchema, formatZodIssues, type LinkDesign } from '@beamwright/link-core';
-import { isAllowed, REVIEW_TRANSITIONS, type LinkStatus, type PermissionAction, type Role } from '@beamwright/link-core/contracts';
+import { isAllowed, REVIEW_TRANSITIONS, VariantsRequestSchema, type LinkStatus, type PermissionAction, type Role } from '@beamwright/link-core/contracts';
 import { Link } from '../../links/link.entity.js';
 import { LinkReview } from '../../links/link-review.entity.js';
 import { LinkRevision } from '../../links/link-revision.entity.js';
+import { LinkRevisionVariant } from '../../links/link-revision-variant.entity.js';
+import { computeVariantBudgets } from '../../links/link-budget.js';
 import { latestRevisionColumns } from '../../links/latest-revision-columns.js';
 import type { LinkFixture } from './demo-fixtures.js';
 
@@ -26,7 +28,8 @@ export function mergeDesign(base: Record<string, unknown>, changes: Record<strin
  * Replays one fixture link's history (revisions and reviews in order) into the database, with the
  * same rules the API enforces: every design validated by LinkDesignSchema, every budget from
  * evaluateLink, every step by a role the shared rule table allows, every review a legal transition
- * on the latest revision, no self-approval.
+ * on the latest revision, no self-approval. A revision's variants (each in full or as changes merged
+ * into the revision's design) pass VariantsRequestSchema and get their budgets as the API's do.
  */
 export async function seedDemoLink(
   manager: EntityManager,
@@ -70,6 +73,16 @@ export async function seedDemoLink(
         throw new Error(`${where(step)}: invalid design: ${formatZodIssues(parsed.error).map((issue) => `${issue.path} ${issue.message}`).join('; ')}`);
       }
       design = parsed.data;
+      const revisionDesign = design;
+      const rawVariants = (event.variants ?? []).map((variant) => ({
+        name: variant.name,
+        design: variant.design ?? mergeDesign(revisionDesign as unknown as Record<string, unknown>, variant.changes ?? {}),
+      }));
+      const parsedVariants = VariantsRequestSchema.safeParse(rawVariants);
+      if (!parsedVariants.success) {
+        throw new Error(`${where(step)}: invalid variants: ${formatZodIssues(parsedVariants.error).map((issue) => `${issue.path ? `variants.${issue.path}` : 'variants'} ${issue.message}`).join('; ')}`);
+      }
+      const variants = computeVariantBudgets(parsedVariants.data);
       const budget = evaluateLink(design);
       const latest = latestRevisionColumns(design, budget);
       if (!link) {
@@ -91,7 +104,7 @@ export async function seedDemoLink(
         await manager.update(Link, { id: link.id }, { latestRevision: link.latestRevision, ...latest });
       }
       latestAuthorId = userId(event.author, step);
-      await manager.insert(LinkRevision, {
+      const inserted = await manager.insert(LinkRevision, {
         linkId: link.id,
         revisionNumber: link.latestRevision,
         design,
@@ -101,6 +114,8 @@ export async function seedDemoLink(
         authorId: latestAuthorId,
         createdAt: at,
       });
+      const revisionId = (inserted.identifiers[0] as { id: string }).id;
+      if (variants.length > 0) await manager.insert(LinkRevisionVariant, variants.map((variant) => ({ ...variant, revisionId })));
       status = 'draft';
     } else {
       if (!link) throw new Error(`${where(step)}: a review needs a revision before it`);

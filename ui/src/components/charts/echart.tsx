@@ -3,7 +3,7 @@
 // (see lazy-echart.tsx), so the charts never weigh on the first screen.
 import ReactEChartsCore from 'echarts-for-react/esm/core';
 import * as echarts from 'echarts/core';
-import { BarChart, LineChart } from 'echarts/charts';
+import { BarChart, CustomChart, LineChart, ScatterChart } from 'echarts/charts';
 import {
   AriaComponent,
   GridComponent,
@@ -12,6 +12,7 @@ import {
   MarkLineComponent,
   MarkPointComponent,
   TooltipComponent,
+  VisualMapContinuousComponent,
 } from 'echarts/components';
 import { SVGRenderer } from 'echarts/renderers';
 import type { EChartsCoreOption } from 'echarts/core';
@@ -21,6 +22,10 @@ import { CHART_TEXT } from '@/components/charts/chart-theme';
 echarts.use([
   LineChart,
   BarChart,
+  // the heat maps: one rect per budget (custom), the design's point (scatter), the colour scale
+  CustomChart,
+  ScatterChart,
+  VisualMapContinuousComponent,
   GridComponent,
   TooltipComponent,
   LegendComponent,

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { LinkDesignSchema, evaluateLink } from '@beamwright/link-core';
-import { draftFromDesign, evaluateDraft, rebaseDraft, toOneOverESquaredRadius } from '@/features/link-design/design-draft';
+import { draftFromDesign, evaluateDraft, toOneOverESquaredRadius } from '@/features/link-design/design-draft';
+import { rebaseDraft } from '@/features/link-design/design-rebase';
 import { diffDesigns } from '@/features/link-design/design-diff';
 import { workedExampleDesign } from '@/testing/designs';
 

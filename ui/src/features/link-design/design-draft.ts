@@ -3,7 +3,6 @@
 // validates the result with the shared LinkDesignSchema, so every problem lands next to its field.
 import { LinkDesignSchema, convertBeamWidth, formatZodIssues, wattsToDbm, type LinkDesignInput } from '@beamwright/link-core';
 import { parseQuantity } from '@beamwright/link-core/units';
-import type { ReceiverSpec, TransmitterSpec } from '@beamwright/link-core/contracts';
 import {
   QUANTITY_FIELDS,
   QUANTITY_FIELD_IDS,
@@ -56,7 +55,8 @@ function writeNumber(value: number): string {
   return String(Number(value.toPrecision(6)));
 }
 
-function writeQuantity(field: QuantityField, value: number): string {
+/** The text a form field shows for a value in SI (or dB/dBm): in the field's display unit, trimmed. */
+export function writeQuantity(field: QuantityField, value: number): string {
   switch (field.kind) {
     case 'power':
       return `${writeNumber(value)} dBm`;
@@ -137,7 +137,7 @@ function sentence(label: string, reason: string): string {
   return `${label} ${reason}`;
 }
 
-type FieldReading = { ok: true; value: number | undefined } | { ok: false; reason: string };
+export type FieldReading = { ok: true; value: number | undefined } | { ok: false; reason: string };
 
 /** Each quantity field read into the schema's unit (1/e² radius and half-angle included). */
 export function readDraftValues(draft: DesignDraft): Record<QuantityFieldId, FieldReading> {
@@ -190,100 +190,4 @@ export function evaluateDraft(draft: DesignDraft, base: LinkDesignInput | null):
   }
   if (Object.keys(errors).length > 0 || !result.success) return { design: null, errors };
   return { design: result.data, errors };
-}
-
-function sameNumber(a: number | undefined, b: number | undefined): boolean {
-  if (a === undefined || b === undefined) return a === b;
-  return Math.abs(a - b) <= 1e-9 * Math.max(Math.abs(a), Math.abs(b));
-}
-
-export interface RebaseResult {
-  /** the latest design with the engineer's own edits applied on top */
-  draft: DesignDraft;
-  /** fields the engineer had changed, now re-applied */
-  reapplied: string[];
-  /** of those, the fields the other save had changed too (the engineer's value is kept) */
-  overlapping: string[];
-}
-
-/**
- * After a save conflict: start again from the latest stored design and re-apply every field the
- * engineer had changed relative to the revision they started from. Text that does not parse counts
- * as an edit and is kept as typed, so nothing typed is lost.
- */
-export function rebaseDraft(mine: DesignDraft, myBase: LinkDesignInput, latest: LinkDesignInput): RebaseResult {
-  const baseDraft = draftFromDesign(myBase);
-  const next = draftFromDesign(latest);
-  const mineReadings = readDraftValues(mine);
-  const baseReadings = readDraftValues(baseDraft);
-  const latestReadings = readDraftValues(next);
-  const differs = (a: FieldReading, b: FieldReading) => !(a.ok && b.ok && sameNumber(a.value, b.value));
-  const reapplied: string[] = [];
-  const overlapping: string[] = [];
-
-  for (const id of QUANTITY_FIELD_IDS) {
-    if (!differs(mineReadings[id], baseReadings[id])) continue;
-    next.text[id] = mine.text[id];
-    if (id === 'transmitter.waistRadiusM') next.beamSize = { ...mine.beamSize };
-    if (id === 'transmitter.halfAngleDivergenceRad') next.divergence = { ...mine.divergence };
-    reapplied.push(id);
-    if (differs(baseReadings[id], latestReadings[id])) overlapping.push(id);
-  }
-
-  const choices = [
-    ['atmosphereModel', 'atmosphere.model'],
-    ['visibilityDefinition', 'atmosphere.visibilityDefinition'],
-    ['turbulenceModel', 'atmosphere.turbulenceModel'],
-    ['scintillationInclude', 'scintillation.include'],
-  ] as const;
-  for (const [key, path] of choices) {
-    if (mine[key] === baseDraft[key]) continue;
-    (next as unknown as Record<string, unknown>)[key] = mine[key];
-    reapplied.push(path);
-    if (draftFromDesign(latest)[key] !== baseDraft[key]) overlapping.push(path);
-  }
-  return { draft: next, reapplied, overlapping };
-}
-
-/** Fills the transmitter fields from a catalogue model, keeping the datasheet's own definitions. */
-export function applyTransmitterSpec(draft: DesignDraft, spec: TransmitterSpec): DesignDraft {
-  const text = { ...draft.text };
-  const write = (id: QuantityFieldId, value: number | undefined) => {
-    text[id] = value === undefined ? '' : writeQuantity(QUANTITY_FIELDS[id], value);
-  };
-  write('transmitter.wavelengthM', spec.wavelengthM);
-  write('transmitter.powerDbm', spec.powerDbm);
-  write('transmitter.m2', spec.m2 ?? 1);
-  write('transmitter.opticsLossDb', spec.opticsLossDb);
-  let beamSize: DesignDraft['beamSize'];
-  if (spec.beamSize.kind === 'waist-radius') {
-    write('transmitter.waistRadiusM', spec.beamSize.waistRadiusM);
-    beamSize = { extent: 'radius', definition: '1/e2' };
-  } else {
-    write('transmitter.waistRadiusM', spec.beamSize.diameterM);
-    beamSize = { extent: 'diameter', definition: spec.beamSize.definition };
-  }
-  let divergence = draft.divergence;
-  if (spec.divergence) {
-    write('transmitter.halfAngleDivergenceRad', spec.divergence.angleRad);
-    divergence = { extent: spec.divergence.angle, definition: spec.divergence.definition };
-  } else {
-    write('transmitter.halfAngleDivergenceRad', undefined);
-  }
-  return { ...draft, text, beamSize, divergence };
-}
-
-/** Fills the receiver fields from a catalogue model. */
-export function applyReceiverSpec(draft: DesignDraft, spec: ReceiverSpec): DesignDraft {
-  const text = { ...draft.text };
-  const write = (id: QuantityFieldId, value: number | undefined) => {
-    text[id] = value === undefined ? '' : writeQuantity(QUANTITY_FIELDS[id], value);
-  };
-  write('receiver.apertureDiameterM', spec.apertureDiameterM);
-  write('receiver.obscurationRatio', spec.obscurationRatio ?? 0);
-  write('receiver.opticsLossDb', spec.opticsLossDb);
-  write('receiver.sensitivityDbm', spec.sensitivityDbm);
-  write('receiver.overloadDbm', spec.overloadDbm);
-  write('receiver.fieldOfViewRad', spec.fieldOfViewRad);
-  return { ...draft, text };
 }

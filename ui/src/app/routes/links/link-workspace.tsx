@@ -9,7 +9,11 @@ import { LinkHeader } from '@/features/links/components/link-header';
 import { DesignReadout } from '@/features/link-design/components/design-readout';
 import { DesignResults } from '@/features/link-design/components/design-results';
 import { DesignEditor } from '@/app/routes/links/design-editor';
+import { REQUIRED_LINK_MARGIN_DB } from '@beamwright/link-core';
 import type { LinkDetail } from '@beamwright/link-core/contracts';
+import { ResultsTabs } from '@/app/routes/links/results-tabs';
+import { MarginExplorer } from '@/features/explore/components/margin-explorer';
+import { AlternativesPanel } from '@/features/variants/components/alternatives-panel';
 import { useWorkspaceStyles } from '@/app/routes/links/workspace-layout';
 import { SitePathSummary } from '@/features/sites/components/site-path-summary';
 import { ReviewActions } from '@/features/reviews/components/review-actions';
@@ -44,7 +48,21 @@ function DesignViewer({ link, role, userId }: { link: LinkDetail; role: Role | u
           <DesignReadout design={link.design} />
         </div>
         <div className={styles.results}>
-          <DesignResults design={link.design} budget={link.budget} />
+          <ResultsTabs
+            alternativesCount={link.variants?.length}
+            views={{
+              budget: <DesignResults design={link.design} budget={link.budget} />,
+              explore: <MarginExplorer design={link.design} requiredMarginDb={REQUIRED_LINK_MARGIN_DB} />,
+              alternatives: (
+                <AlternativesPanel
+                  primaryDesign={link.design}
+                  primaryLabel={`Revision ${link.revision}`}
+                  requiredMarginDb={REQUIRED_LINK_MARGIN_DB}
+                  variants={(link.variants ?? []).map((variant) => ({ id: String(variant.index), name: variant.name, design: variant.design }))}
+                />
+              ),
+            }}
+          />
         </div>
       </div>
     </>

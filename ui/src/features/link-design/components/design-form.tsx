@@ -1,4 +1,4 @@
-import { memo, type ReactNode } from 'react';
+import { Fragment, memo, type ReactNode } from 'react';
 import {
   Caption1,
   Field,
@@ -69,23 +69,27 @@ export interface DesignFormProps {
   receiverExtras?: ReactNode;
   /** shown under the path length (what the two sites say) */
   pathExtras?: ReactNode;
+  /** an action under a field, across the section (the "size it for me" solvers) */
+  fieldActions?: Partial<Record<QuantityFieldId, ReactNode>>;
 }
 
-function DesignFormView({ draft, errors, changedFieldIds, onTextChange, onUpdate, resolved, powerNote, transmitterExtras, receiverExtras, pathExtras }: DesignFormProps) {
+function DesignFormView({ draft, errors, changedFieldIds, onTextChange, onUpdate, resolved, powerNote, transmitterExtras, receiverExtras, pathExtras, fieldActions }: DesignFormProps) {
   const styles = useStyles();
   const changed = (id: string) => changedFieldIds.includes(id);
   const input = (id: QuantityFieldId, props: { extra?: ReactNode; hint?: ReactNode; wide?: boolean } = {}) => (
-    <QuantityInput
-      key={id}
-      id={id}
-      draft={draft}
-      errors={errors}
-      changed={changed(id)}
-      onTextChange={onTextChange}
-      extra={props.extra}
-      hint={props.hint}
-      className={props.wide ? styles.wide : undefined}
-    />
+    <Fragment key={id}>
+      <QuantityInput
+        id={id}
+        draft={draft}
+        errors={errors}
+        changed={changed(id)}
+        onTextChange={onTextChange}
+        extra={props.extra}
+        hint={props.hint}
+        className={props.wide ? styles.wide : undefined}
+      />
+      {fieldActions?.[id] && <div className={styles.wide}>{fieldActions[id]}</div>}
+    </Fragment>
   );
 
   const beamSizeConverted = draft.beamSize.extent !== 'radius' || draft.beamSize.definition !== '1/e2';

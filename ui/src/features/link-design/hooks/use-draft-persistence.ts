@@ -1,6 +1,6 @@
 import { useEffect, useRef, useState } from 'react';
 import type { LinkDesignInput } from '@beamwright/link-core';
-import { rebaseDraft } from '@/features/link-design/design-draft';
+import { rebaseDraft } from '@/features/link-design/design-rebase';
 import { clearStoredDraft, loadStoredDraft, storeDraft } from '@/features/link-design/draft-storage';
 import type { DesignWorkspace } from '@/features/link-design/hooks/use-design-workspace';
 

@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { beamEnvelope, evaluateLink, marginVsRange } from '@beamwright/link-core';
-import { beamEnvelopeData, beamEnvelopeOption, LONG_TERM_RADIUS_NAME, marginVsRangeOption, waterfallSteps } from '@/features/link-design/charts/chart-options';
+import { beamEnvelopeData, beamEnvelopeOption, LONG_TERM_RADIUS_NAME } from '@/features/link-design/charts/beam-envelope-chart';
+import { marginVsRangeOption } from '@/features/link-design/charts/margin-charts';
+import { waterfallSteps } from '@/features/link-design/charts/waterfall-chart';
 import { workedExampleDesign } from '@/testing/designs';
 
 describe('chart options', () => {
