@@ -14,6 +14,7 @@ import { longTermBeamRadiusFastM } from '../turbulence/beam-wave.js';
 import { DB_PER_NATURAL_LOG_POWER as DB_PER_NEPER } from '../units/constants.js';
 import {
   alNaboulsiNumerator,
+  centredGeometricLossDb,
   emptyResolvedDesign,
   evaluateChainInto,
   newChainResult,
@@ -132,6 +133,20 @@ const FADE_PROBABILITY = 16;
 const SYSTEM_MARGIN = 17;
 /** Fields of the path part: the capture, pointing and fade terms depend on these (and not on the others). */
 const PATH_FIELDS = [RANGE, WAVELENGTH, WAIST, DIVERGENCE, M2, APERTURE, OBSCURATION, JITTER, BIAS, OUTAGE_PROBABILITY, CN2, FADE_PROBABILITY];
+const PATH_FIELD_NAMES: ReadonlySet<string> = new Set(PATH_FIELDS.map((index) => LINK_MARGIN_FIELDS[index]));
+
+/**
+ * True for a field of the margin's path part (range, wavelength, beam, apertures, pointing, Cn², fade
+ * probability), false for those that enter the margin linearly or through γ(V)·L (power, optics
+ * losses, sensitivity, allowance, visibility). A sweep or a grid is cheapest with its path axis outer.
+ *
+ * @param field a field path
+ * @returns whether the kernel recomputes the path part when this field changes
+ * @see evaluateLinkMargins
+ */
+export function isLinkMarginPathField(field: string): boolean {
+  return PATH_FIELD_NAMES.has(field);
+}
 
 /**
  * One batch, evaluated block by block in stages (beam radii, capture and pointing, fade margin,
@@ -278,7 +293,13 @@ class BatchRun {
         continue;
       }
       const apertureRadiusM = aperture[j]! / 2;
-      loss[j + 1] = -DB_PER_NEPER * logMeanAnnularCapture(longTerm[j + 1]!, apertureRadiusM, apertureRadiusM * obscuration[j]!, jitter[j]! * range[j]!, bias[j]! * range[j]!);
+      const jitterM = jitter[j]! * range[j]!;
+      const biasM = bias[j]! * range[j]!;
+      // as the chain sums them (link-chain.ts): the centred loss where there is no pointing error at all
+      loss[j + 1] =
+        jitterM === 0 && biasM === 0
+          ? centredGeometricLossDb(longTerm[j + 1]!, apertureRadiusM, apertureRadiusM * obscuration[j]!)
+          : -DB_PER_NEPER * logMeanAnnularCapture(longTerm[j + 1]!, apertureRadiusM, apertureRadiusM * obscuration[j]!, jitterM, biasM);
     }
   }
 

@@ -311,8 +311,9 @@ export function evaluateChain(design: ResolvedDesign, rangeM: number, attenuatio
  *
  * The capture and pointing terms enter the margin only through their sum, which in mean mode is
  * −10·log10 E[C(R; W_LT)]: the geometric loss at W, the spread 10·log10(C(0; W)/C(0; W_LT)) and the
- * pointing loss −10·log10(E[C]/C(0; W_LT)) telescope. At detail `'margin'` the chain computes that
- * one logarithm (equal to the sum of the three terms to rounding, ~1e-14 dB) and skips the split.
+ * pointing loss −10·log10(E[C]/C(0; W_LT)) telescope. The chain computes the margin from that sum
+ * at every detail; `'margin'` skips the split into the three terms (which sum to it to rounding,
+ * ~1e-14 dB).
  *
  * @param out the result to write
  * @param design resolved design
@@ -336,38 +337,40 @@ export function evaluateChainInto(out: ChainResult, design: ResolvedDesign, rang
     : beamRadiusM;
   const meanPointing = Number.isNaN(design.pointingOutageAngleRad);
   const atmosphericLossDb = (attenuationDbPerKm * rangeM) / 1000;
-  let receivedPowerDbm: number;
+  // The capture and pointing terms enter the margin only through their sum, computed the same way at
+  // every detail, so that the batch kernel's margins equal evaluateLink's to the last bit: in mean
+  // mode −10·log10 E[C(R; W_LT)] (the centred capture loss where there is no error at all), in
+  // outage mode the centred capture loss plus the loss at the outage quantile.
+  let captureLossDb = Number.NaN;
+  let outagePointingLossDb = Number.NaN;
+  let captureAndPointingLossDb: number;
+  if (meanPointing && !(jitterM === 0 && biasM === 0)) {
+    captureAndPointingLossDb = -DB_PER_NEPER_POWER * logMeanAnnularCapture(captureBeamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM);
+  } else {
+    captureLossDb = centredGeometricLossDb(captureBeamRadiusM, apertureRadiusM, obscurationRadiusM);
+    if (meanPointing) captureAndPointingLossDb = captureLossDb;
+    else {
+      outagePointingLossDb = exactOutagePointingLossAtRadiusDb(captureBeamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM, design.pointingOutageProbability, design.pointingOutageAngleRad * rangeM);
+      captureAndPointingLossDb = captureLossDb + outagePointingLossDb;
+    }
+  }
+  out.captureAndPointingLossDb = captureAndPointingLossDb;
   if (detail === 'margin') {
     out.geometricLossDb = Number.NaN;
     out.turbulenceBeamSpreadLossDb = Number.NaN;
     out.pointingLossDb = Number.NaN;
     out.captureFraction = Number.NaN;
-    const captureAndPointingLossDb = meanPointing
-      ? -DB_PER_NEPER_POWER * logMeanAnnularCapture(captureBeamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM)
-      : centredGeometricLossDb(captureBeamRadiusM, apertureRadiusM, obscurationRadiusM) +
-        exactOutagePointingLossAtRadiusDb(captureBeamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM, design.pointingOutageProbability, design.pointingOutageAngleRad * rangeM);
-    out.captureAndPointingLossDb = captureAndPointingLossDb;
-    receivedPowerDbm = design.powerDbm - design.transmitOpticsLossDb - captureAndPointingLossDb - atmosphericLossDb - design.receiveOpticsLossDb;
   } else {
+    // The split: geometric loss at W, spread to W_LT, and the pointing term relative to C(0; W_LT)
+    // (negative when an offset puts more power on an obscured aperture).
     const geometricLossDb = centredGeometricLossDb(beamRadiusM, apertureRadiusM, obscurationRadiusM);
-    const captureLossDb = beamWave ? centredGeometricLossDb(captureBeamRadiusM, apertureRadiusM, obscurationRadiusM) : geometricLossDb;
-    const turbulenceBeamSpreadLossDb = beamWave ? captureLossDb - geometricLossDb : 0;
-    // Exact capture of the annular aperture under the Rician error, relative to the centred capture
-    // (negative when an offset puts more power on an obscured aperture). Mean mode:
-    // −10·log10(E[C]/C(0)) with 10·log10 C(0) = −captureLossDb already at hand.
-    const pointingLossDb = meanPointing
-      ? jitterM === 0 && biasM === 0
-        ? 0
-        : -DB_PER_NEPER_POWER * logMeanAnnularCapture(captureBeamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM) - captureLossDb + 0
-      : exactOutagePointingLossAtRadiusDb(captureBeamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM, design.pointingOutageProbability, design.pointingOutageAngleRad * rangeM);
+    if (Number.isNaN(captureLossDb)) captureLossDb = beamWave ? centredGeometricLossDb(captureBeamRadiusM, apertureRadiusM, obscurationRadiusM) : geometricLossDb;
     out.geometricLossDb = geometricLossDb;
-    out.turbulenceBeamSpreadLossDb = turbulenceBeamSpreadLossDb;
-    out.pointingLossDb = pointingLossDb;
+    out.turbulenceBeamSpreadLossDb = beamWave ? captureLossDb - geometricLossDb : 0;
+    out.pointingLossDb = meanPointing ? (jitterM === 0 && biasM === 0 ? 0 : captureAndPointingLossDb - captureLossDb + 0) : outagePointingLossDb;
     out.captureFraction = annularCaptureFractionStable(beamRadiusM, apertureRadiusM, obscurationRadiusM);
-    out.captureAndPointingLossDb = geometricLossDb + turbulenceBeamSpreadLossDb + pointingLossDb;
-    receivedPowerDbm =
-      design.powerDbm - design.transmitOpticsLossDb - geometricLossDb - turbulenceBeamSpreadLossDb - atmosphericLossDb - pointingLossDb - design.receiveOpticsLossDb;
   }
+  const receivedPowerDbm = design.powerDbm - design.transmitOpticsLossDb - captureAndPointingLossDb - atmosphericLossDb - design.receiveOpticsLossDb;
   let rytovVarianceSpherical = 0;
   let scintillationIndex = 0;
   let scintillationFadeMarginDb = 0;
