@@ -326,6 +326,15 @@ export function logRicianAnnulusProbability(offsetM: number, sigmaM: number, inn
         ? noncentralChiSquare2SfFast(inner * inner, noncentrality) - noncentralChiSquare2SfFast(outer * outer, noncentrality)
         : noncentralChiSquare2CdfFast(outer * outer, noncentrality) - noncentralChiSquare2CdfFast(inner * inner, noncentrality);
   if (probability > SMALLEST_LINEAR_PROBABILITY) return Math.log(probability);
+  return logRicianAnnulusBeyondTheDoubles(offset, noncentrality, inner, outer);
+}
+
+/**
+ * {@link logRicianAnnulusProbability} where the difference of the tails leaves the doubles: the
+ * log-domain series, then the quadrature (kept out of the common path so that it stays small
+ * enough for the JIT to compile into its callers).
+ */
+function logRicianAnnulusBeyondTheDoubles(offset: number, noncentrality: number, inner: number, outer: number): number {
   const logScaled = logRicianAnnulusByScaledSeries(noncentrality, inner, outer);
   // finite unless one of its plain factors underflowed (offsets of thousands of s): integrate then
   if (Number.isFinite(logScaled)) return logScaled;
