@@ -139,3 +139,8 @@ export type {
   RangeForAvailability,
   AvailabilityAtRange,
 } from './budget/availability-analysis.js';
+
+// --- Batch margin kernel (METHODS.md §10.8): margins of many variations of one design, for sweeps,
+// heat maps and solvers, without a budget object per point. Kept together at the end of the entry.
+export { evaluateLinkMargins, linkMarginPointDesign, LINK_MARGIN_FIELDS } from './budget/evaluate-link-margins.js';
+export type { LinkMarginField, LinkMarginColumns } from './budget/evaluate-link-margins.js';

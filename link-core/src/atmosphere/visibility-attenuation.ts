@@ -146,9 +146,25 @@ export function visibilityExtinctionPerKm(input: VisibilityAttenuationInput): nu
  * @see Kim, McArthur & Korevaar, Proc. SPIE 4214 (2001), eq. 2–3; Kruse et al. (1962).
  */
 export function visibilityExtinctionPerKmFast(kruse: boolean, visibilityKm: number, wavelengthM: number, koschmiederConstantValue = KOSCHMIEDER_CONSTANT_2_PERCENT): number {
+  return visibilityExtinctionPerKmOfLogWavelength(kruse, visibilityKm, Math.log(wavelengthM / VISIBILITY_REFERENCE_WAVELENGTH_M), koschmiederConstantValue);
+}
+
+/**
+ * {@link visibilityExtinctionPerKmFast} with ln(λ/550 nm) at hand: (λ/550 nm)^(−q) is written as
+ * exp(−q·ln(λ/550 nm)), a few times cheaper than Math.pow, and the budget takes the logarithm once
+ * per design.
+ *
+ * @param kruse true for Kruse's exponent, false for Kim's
+ * @param visibilityKm 2 % visibility [km], > 0
+ * @param logWavelengthRatio ln(λ/550 nm), λ the vacuum wavelength
+ * @param koschmiederConstantValue K (3.91 in the sources)
+ * @returns β [1/km]
+ * @see Kim, McArthur & Korevaar, Proc. SPIE 4214 (2001), eq. 2–3; Kruse et al. (1962).
+ */
+export function visibilityExtinctionPerKmOfLogWavelength(kruse: boolean, visibilityKm: number, logWavelengthRatio: number, koschmiederConstantValue = KOSCHMIEDER_CONSTANT_2_PERCENT): number {
   const q = kruse ? kruseExponent(visibilityKm) : kimExponent(visibilityKm);
   const base = koschmiederConstantValue / visibilityKm;
-  return q === 0 ? base : base * Math.pow(wavelengthM / VISIBILITY_REFERENCE_WAVELENGTH_M, -q);
+  return q === 0 ? base : base * Math.exp(-q * logWavelengthRatio);
 }
 
 /**
@@ -219,7 +235,8 @@ export function visibilityForAttenuationM(input: VisibilityForAttenuationInput):
 export function visibility2PercentForAttenuationKm(kruse: boolean, wavelengthM: number, attenuationDbPerKm: number, koschmiederConstantValue = KOSCHMIEDER_CONSTANT_2_PERCENT): number {
   let lo = Math.log10(INVERSE_VISIBILITY_MIN_M / 1000);
   let hi = Math.log10(INVERSE_VISIBILITY_MAX_M / 1000);
-  const gamma = (logV: number) => DB_PER_NATURAL_LOG_POWER * visibilityExtinctionPerKmFast(kruse, Math.pow(10, logV), wavelengthM, koschmiederConstantValue);
+  const logWavelengthRatio = Math.log(wavelengthM / VISIBILITY_REFERENCE_WAVELENGTH_M);
+  const gamma = (logV: number) => DB_PER_NATURAL_LOG_POWER * visibilityExtinctionPerKmOfLogWavelength(kruse, Math.pow(10, logV), logWavelengthRatio, koschmiederConstantValue);
   if (gamma(lo) <= attenuationDbPerKm) return Math.pow(10, lo);
   if (gamma(hi) >= attenuationDbPerKm) return Math.pow(10, hi);
   // 60 halvings of a 6-decade interval give ~5e-18 decades: below double precision of V.

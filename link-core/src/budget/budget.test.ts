@@ -41,6 +41,11 @@ describe('evaluateLink', () => {
     expect(() => evaluateLink(stringRange)).toThrow(RangeError);
   });
 
+  it('names the field of a NaN or infinite input also where the fade margin is included', () => {
+    expect(() => evaluateLink(variant((design) => (design.rangeM = Number.NaN)))).toThrow(/evaluateLink: rangeM/);
+    expect(() => evaluateLink(variant((design) => (design.atmosphere.cn2 = Infinity)))).toThrow(/evaluateLink: atmosphere\.cn2/);
+  });
+
   it('returns a budget that satisfies its own schema', () => {
     expect(LinkBudgetSchema.safeParse(budget).success).toBe(true);
   });

@@ -7,9 +7,9 @@ import type { BudgetCheck, BudgetTerm, BudgetTermKey, LinkBudget } from '../sche
 import { formatZodIssues } from '../schemas/format-zod-issues.js';
 import { LinkDesignSchema, type LinkDesignInput } from '../schemas/link-design.schema.js';
 import { BEAM_WAVE_FADE_DESCRIPTION, FOG_ATTENUATION_DESCRIPTION, POINTING_OUTAGE_DESCRIPTION, TERM_DESCRIPTIONS, type TermDescription } from './budget-terms.js';
-import { emptyResolvedDesign, evaluateChain, resolveDesign, resolveDesignInto, specificAttenuationDbPerKm, type ChainResult, type ResolvedDesign } from './link-chain.js';
+import { emptyResolvedDesign, evaluateChainInto, newChainResult, resolveDesign, resolveDesignInto, specificAttenuationDbPerKm, type ChainResult, type ResolvedDesign } from './link-chain.js';
 import { logOffsetAnnularCapture } from '../capture/capture.js';
-import { captureFallsFromCentre, exactOutagePointingLossDb, probabilityOfCaptureBelowRising, ricianOutageRadius } from '../pointing/exact-pointing.js';
+import { captureFallsFromCentre, probabilityOfCaptureBelowRising, ricianOutageRadiusOverSigmaWithin, ricianOutageRadiusTable } from '../pointing/exact-pointing.js';
 import { normalQuantileOf } from '../numeric/normal.js';
 import { toFixedTwo } from './budget-text.js';
 import { DB_PER_NATURAL_LOG_POWER as DB_PER_NEPER } from '../units/constants.js';
@@ -115,15 +115,26 @@ const HIDDEN_OUTAGE_PROBABILITY = 1e-3;
 /** The mean hides an outage when the loss at that probability exceeds it by more than this [dB]. */
 const HIDDEN_OUTAGE_EXCESS_DB = 1;
 const RAYLEIGH_RADIUS_AT_HIDDEN_OUTAGE = Math.sqrt(-2 * Math.log(HIDDEN_OUTAGE_PROBABILITY));
+const NORMAL_RADIUS_AT_HIDDEN_OUTAGE = -normalQuantileOf(HIDDEN_OUTAGE_PROBABILITY);
+
+/**
+ * r_p/σ exceeded with 1e-3 against ν/σ = 0, 1/16, …, 20 (about a millisecond to build, once at
+ * load; beyond 20 the series leave their fast domain): for any bias/jitter ratio up to 20 two
+ * neighbouring entries bracket r_p to 0.06σ or better (exact-pointing.ts), where the closed-form
+ * bracket below is 0.63σ wide.
+ */
+const HIDDEN_OUTAGE_RADII = ricianOutageRadiusTable(HIDDEN_OUTAGE_PROBABILITY, 1 / 16, 321);
 
 /**
  * In mean mode, when the pointing loss exceeded with probability 1e-3 is more than 1 dB above the
- * mean loss: that loss, or a lower bound of it; undefined otherwise. Where C falls with the offset
- * the radius r_p exceeded with 1e-3 lies in [max(3.717σ, ν + 3.090σ), ν + 3.717σ] (R is
- * stochastically larger than without bias; P(R > ν + t) ≥ P(X₁ > t); |ν + X| ≤ ν + |X|), so the
- * small-receiver bound at the upper end, then the captures at the ends, decide most designs without
- * the quantile: the warning then states the loss at the lower end as "at least". Only between them
- * (or where C rises) is the exact quantile solved.
+ * mean loss: that loss, or a lower bound of it; undefined otherwise. The radius r_p exceeded with
+ * 1e-3 is first bracketed without a series: from the table of r_p/σ against ν/σ (monotone, so two
+ * neighbouring entries bracket it), or beyond the table by [max(3.717σ, ν + 3.090σ), ν + 3.717σ]
+ * (R is stochastically larger than without bias; P(R > ν + t) ≥ P(X₁ > t); |ν + X| ≤ ν + |X|).
+ * Closed-form bounds on the capture at the ends of that bracket, then the exact captures there,
+ * decide nearly every design without solving for r_p: the warning then states the loss at the
+ * lower end as "at least". Only where the 1 dB level falls inside the bracket (or where C rises
+ * from the centre) is r_p solved, by Newton steps inside the bracket.
  */
 function hiddenPointingOutage(design: ResolvedDesign, chain: ChainResult): { lossDb: number; exact: boolean } | undefined {
   if (!Number.isNaN(design.pointingOutageAngleRad)) return undefined;
@@ -133,17 +144,43 @@ function hiddenPointingOutage(design: ResolvedDesign, chain: ChainResult): { los
   const beamRadiusM = chain.longTermBeamRadiusM;
   const apertureRadiusM = design.apertureDiameterM / 2;
   const obscurationRadiusM = apertureRadiusM * design.obscurationRatio;
-  // For any centrally symmetric aperture, writing the shifted Gaussian as g(x)·g(r)/g(0)·e^(4x·r/W²)
-  // and using 1 + t ≤ e^t and |x| ≤ a (derived): exp(−2r²/W²) ≤ C(r)/C(0) ≤ exp(−2(r² − 2ar)/W²).
-  // Both bounds grow with r (the lower one beyond a), so the loss exceeded with 1e-3 lies between
-  // the lower bound at the lower radius and the small-receiver loss at the upper radius, whether or
-  // not C falls from the centre: most designs are decided here without a series.
-  const upperRadiusM = biasM + RAYLEIGH_RADIUS_AT_HIDDEN_OUTAGE * jitterM;
-  const smallReceiverBoundDb = 2 * DB_PER_NEPER * (upperRadiusM / beamRadiusM) ** 2;
+  // The bracket of r_p/σ, and a start for Newton inside it.
+  const offset = biasM / jitterM;
+  const position = offset / HIDDEN_OUTAGE_RADII.offsetStep;
+  const radii = HIDDEN_OUTAGE_RADII.radiiOverSigma;
+  let lowerOverSigma: number;
+  let upperOverSigma: number;
+  let startOverSigma: number;
+  if (position < radii.length - 1) {
+    const index = Math.floor(position);
+    // the tabulated roots are good to 1e-13 relative: widen by 1e-12 so that the bracket holds
+    lowerOverSigma = radii[index]! * (1 - 1e-12);
+    upperOverSigma = radii[index + 1]! * (1 + 1e-12);
+    startOverSigma = radii[index]! + (radii[index + 1]! - radii[index]!) * (position - index);
+  } else {
+    lowerOverSigma = Math.max(RAYLEIGH_RADIUS_AT_HIDDEN_OUTAGE, offset + NORMAL_RADIUS_AT_HIDDEN_OUTAGE);
+    upperOverSigma = offset + RAYLEIGH_RADIUS_AT_HIDDEN_OUTAGE;
+    startOverSigma = Math.min(Math.max(offset + NORMAL_RADIUS_AT_HIDDEN_OUTAGE + 0.5 / offset, lowerOverSigma), upperOverSigma);
+  }
+  const lowerRadiusM = lowerOverSigma * jitterM;
+  const upperRadiusM = upperOverSigma * jitterM;
+  // Closed-form bounds on the capture of any rotationally symmetric aperture (derived): writing the
+  // shifted Gaussian as g(x)·e^(−2r²/W²)·e^(4x·r/W²), C(r)/C(0) = e^(−2r²/W²)·E[e^(4x·r/W²)] with
+  // x distributed over the aperture with weights g. By symmetry that mean is E[cosh(4x∥r/W²)]
+  // = E[I0(4ρr/W²)] (ρ = |x|, the angle uniform), between 1 and I0(4ar/W²) as ρ ≤ a. So
+  //   exp(−2r²/W²) ≤ C(r)/C(0) ≤ exp(−2r²/W²)·I0(u),  u = 4ar/W²,  ln I0(u) ≤ min(u²/4, u)
+  // (I0(u) ≤ Σ(u²/4)^k/k! and I0(u) ≤ e^u). The upper loss bound 2·4.343·r²/W² grows with r, so the
+  // loss exceeded with 1e-3 is at most its value at the upper radius; the lower bound
+  // 4.343·(2r²/W² − min(u²/4, u)) grows with r where 2a² < W² (or past max(a, W²/a)), and then the
+  // loss exceeded with 1e-3 is at least its value at the lower radius, whether or not C falls from
+  // the centre. For a receiver small against the beam the two nearly meet: most designs are decided
+  // here without a series.
+  const beamSquareM2 = beamRadiusM * beamRadiusM;
+  const smallReceiverBoundDb = (2 * DB_PER_NEPER * upperRadiusM * upperRadiusM) / beamSquareM2;
   if (!(smallReceiverBoundDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB)) return undefined;
-  const lowerRadiusM = Math.max(RAYLEIGH_RADIUS_AT_HIDDEN_OUTAGE * jitterM, biasM + NORMAL_RADIUS_AT_HIDDEN_OUTAGE * jitterM);
-  if (lowerRadiusM >= apertureRadiusM) {
-    const lowerBoundDb = (2 * DB_PER_NEPER * lowerRadiusM * (lowerRadiusM - 2 * apertureRadiusM)) / (beamRadiusM * beamRadiusM);
+  if (2 * apertureRadiusM * apertureRadiusM < beamSquareM2 || lowerRadiusM >= Math.max(apertureRadiusM, beamSquareM2 / apertureRadiusM)) {
+    const u = (4 * apertureRadiusM * lowerRadiusM) / beamSquareM2;
+    const lowerBoundDb = DB_PER_NEPER * ((2 * lowerRadiusM * lowerRadiusM) / beamSquareM2 - Math.min(0.25 * u * u, u));
     if (lowerBoundDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB) return { lossDb: lowerBoundDb, exact: false };
   }
   const logCentre = -(chain.geometricLossDb + chain.turbulenceBeamSpreadLossDb) / DB_PER_NEPER;
@@ -152,10 +189,19 @@ function hiddenPointingOutage(design: ResolvedDesign, chain: ChainResult): { los
     const lowerLossDb = offsetLossDb(beamRadiusM, apertureRadiusM, obscurationRadiusM, lowerRadiusM, logCentre);
     if (lowerLossDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB) return { lossDb: lowerLossDb, exact: false };
     if (!(offsetLossDb(beamRadiusM, apertureRadiusM, obscurationRadiusM, upperRadiusM, logCentre) - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB)) return undefined;
-    const lossDb = exactOutagePointingLossDb(beamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM, HIDDEN_OUTAGE_PROBABILITY);
+    // The capture falls: the loss exceeded with p is the loss at r_p (exactOutagePointingLossDb).
+    const outageRadiusM = outageRadiusWithinM(offset, jitterM, lowerOverSigma, upperOverSigma, startOverSigma);
+    const lossDb = offsetLossDb(beamRadiusM, apertureRadiusM, obscurationRadiusM, outageRadiusM, logCentre);
     return lossDb - chain.pointingLossDb > HIDDEN_OUTAGE_EXCESS_DB ? { lossDb, exact: true } : undefined;
   }
-  return hiddenPointingOutageRising(chain.pointingLossDb, beamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM, logCentre);
+  const outageRadiusM = outageRadiusWithinM(offset, jitterM, lowerOverSigma, upperOverSigma, startOverSigma);
+  return hiddenPointingOutageRising(chain.pointingLossDb, beamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM, logCentre, outageRadiusM);
+}
+
+/** r_p [m] from its bracket in σ units (the closed form without bias). */
+function outageRadiusWithinM(offset: number, jitterM: number, lowerOverSigma: number, upperOverSigma: number, startOverSigma: number): number {
+  if (offset === 0) return RAYLEIGH_RADIUS_AT_HIDDEN_OUTAGE * jitterM;
+  return ricianOutageRadiusOverSigmaWithin(offset, HIDDEN_OUTAGE_PROBABILITY, lowerOverSigma, upperOverSigma, startOverSigma) * jitterM;
 }
 
 /** −10·log10(C(r)/C(0)) from ln C(0) at hand (a plain function: no closure per budget). */
@@ -170,6 +216,7 @@ function offsetLossDb(beamRadiusM: number, apertureRadiusM: number, obscurationR
  * p is at least L(r_p); when C(r_p) ≤ C(0) it equals L(r_p) ({C < C(r_p)} = (r_p, ∞)); otherwise
  * {C < C(0)} = (r0, ∞) with r0 > r_p, so L_q < 0. What these leave open (a mean gain of more than
  * 1 dB) is decided by P(C(R) < c) > p at the level c of the mean loss plus 1 dB: two crossings.
+ * `outageRadiusM` is r_p.
  */
 function hiddenPointingOutageRising(
   meanLossDb: number,
@@ -179,8 +226,8 @@ function hiddenPointingOutageRising(
   jitterM: number,
   biasM: number,
   logCentre: number,
+  outageRadiusM: number,
 ): { lossDb: number; exact: boolean } | undefined {
-  const outageRadiusM = ricianOutageRadius(jitterM, biasM, HIDDEN_OUTAGE_PROBABILITY);
   // C is flat to second order at the centre; the exact quantile takes it as C(0) there (exact-pointing.ts).
   const lossAtRadiusDb = outageRadiusM < 1e-6 * beamRadiusM ? 0 : offsetLossDb(beamRadiusM, apertureRadiusM, obscurationRadiusM, outageRadiusM, logCentre);
   if (lossAtRadiusDb - meanLossDb > HIDDEN_OUTAGE_EXCESS_DB) return { lossDb: lossAtRadiusDb, exact: lossAtRadiusDb >= 0 };
@@ -192,16 +239,13 @@ function hiddenPointingOutageRising(
   // P(C(R) < c) > p: the quantile lies below c, i.e. L_q > mean + 1 dB (stated as a lower bound).
   return below > HIDDEN_OUTAGE_PROBABILITY ? { lossDb: thresholdDb, exact: false } : undefined;
 }
-const NORMAL_RADIUS_AT_HIDDEN_OUTAGE = -normalQuantileOf(HIDDEN_OUTAGE_PROBABILITY);
 
-// evaluateLink resolves into this one object: everything read from it is copied into the budget.
-const scratchDesign = emptyResolvedDesign();
 
 /**
  * True when every number the chain reads is a number (a missing required field resolves to
  * undefined). A dozen typeof checks: cheap enough for the hot path, unlike a schema parse.
  */
-function hasEveryRequiredNumber(design: ResolvedDesign): boolean {
+export function hasEveryRequiredNumber(design: ResolvedDesign): boolean {
   return (
     typeof design.rangeM === 'number' &&
     typeof design.wavelengthM === 'number' &&
@@ -223,15 +267,39 @@ function hasEveryRequiredNumber(design: ResolvedDesign): boolean {
   );
 }
 
+/** The sum of the numbers the chain reads: finite exactly when each of them is (for the designs the schema accepts). */
+export function sumOfInputs(design: ResolvedDesign): number {
+  return (
+    design.rangeM +
+    design.wavelengthM +
+    design.powerDbm +
+    design.apertureBeamRadiusM +
+    design.halfAngleDivergenceRad +
+    design.m2 +
+    design.transmitOpticsLossDb +
+    design.apertureDiameterM +
+    design.obscurationRatio +
+    design.sensitivityDbm +
+    design.receiveOpticsLossDb +
+    design.jitterSigmaPerAxisRad +
+    design.staticErrorRad +
+    design.visibility2PercentKm +
+    design.cn2 +
+    design.fadeProbability +
+    design.systemMarginDb
+  );
+}
+
 /**
  * The error for a design the engine cannot evaluate: the schema's own issues, so the message names
  * each field ("rangeM: is required"). Only reached on failure, so the parse costs nothing otherwise.
+ * `context` starts the message (the entry, and for a batch the point).
  */
-function invalidDesignError(design: unknown): RangeError {
+export function invalidDesignError(design: unknown, context = 'evaluateLink'): RangeError {
   const result = LinkDesignSchema.safeParse(design);
   const issues = result.success ? [] : formatZodIssues(result.error);
   const detail = issues.length > 0 ? issues.map((issue) => `${issue.path || 'design'}: ${issue.message}`).join('; ') : 'the design is not valid';
-  return new RangeError(`evaluateLink: ${detail}`);
+  return new RangeError(`${context}: ${detail}`);
 }
 
 /**
@@ -250,10 +318,18 @@ function invalidDesignError(design: unknown): RangeError {
  * @see Kim I.I., Korevaar E., Proc. SPIE 4530, 84–95 (2001) (budget structure); each term's source is in its `source`.
  */
 export function evaluateLink(design: LinkDesignInput): LinkBudget {
-  const resolved = resolveDesignInto(scratchDesign, design);
+  // fresh work objects per call: no state lives between calls at module level (METHODS.md §10.8)
+  return budgetOf(design, emptyResolvedDesign(), newChainResult());
+}
+
+function budgetOf(design: LinkDesignInput, workDesign: ResolvedDesign, workChain: ChainResult): LinkBudget {
+  const resolved = resolveDesignInto(workDesign, design);
   if (!hasEveryRequiredNumber(resolved)) throw invalidDesignError(design);
+  // NaN or ±Infinity anywhere makes the sum non-finite: name the field before a model's own guard
+  // (e.g. the beam-wave scintillation's) reports an internal quantity instead.
+  if (!Number.isFinite(sumOfInputs(resolved)) && !LinkDesignSchema.safeParse(design).success) throw invalidDesignError(design);
   const attenuation = specificAttenuationDbPerKm(resolved, resolved.visibility2PercentKm);
-  const chain = evaluateChain(resolved, resolved.rangeM, attenuation, resolved.includeScintillation, true);
+  const chain = evaluateChainInto(workChain, resolved, resolved.rangeM, attenuation, resolved.includeScintillation, 'report');
   // NaN or ±Infinity in an input the typeof check let through (the schema rejects both) shows in
   // the margin or the beam: name the field rather than answer NaN. A design the schema accepts is
   // returned as computed (callers that store budgets check them against LinkBudgetSchema).
@@ -312,5 +388,5 @@ export function evaluateLink(design: LinkDesignInput): LinkBudget {
 export function linkMarginAtRangeDb(design: LinkDesignInput, rangeM: number): number {
   const resolved = resolveDesign(design);
   const attenuation = specificAttenuationDbPerKm(resolved, resolved.visibility2PercentKm);
-  return evaluateChain(resolved, rangeM, attenuation, resolved.includeScintillation).linkMarginDb;
+  return evaluateChainInto(newChainResult(), resolved, rangeM, attenuation, resolved.includeScintillation, 'margin').linkMarginDb;
 }

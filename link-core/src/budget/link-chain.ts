@@ -5,7 +5,7 @@
  * evaluated for any range and specific attenuation.
  */
 import { alNaboulsiFogExtinctionPerKm } from '../atmosphere/fog-and-precipitation.js';
-import { VISIBILITY_2_PERCENT_PER_MOR, visibility2PercentForAttenuationKm, visibilityExtinctionPerKmFast } from '../atmosphere/visibility-attenuation.js';
+import { VISIBILITY_2_PERCENT_PER_MOR, VISIBILITY_REFERENCE_WAVELENGTH_M, visibility2PercentForAttenuationKm, visibilityExtinctionPerKmOfLogWavelength } from '../atmosphere/visibility-attenuation.js';
 import { launchBeamRadiusAtRangeM } from '../beam/launch.js';
 import { annularCaptureFractionStable, logMeanAnnularCapture } from '../capture/capture.js';
 import { exactOutagePointingLossAtRadiusDb, ricianOutageRadius } from '../pointing/exact-pointing.js';
@@ -13,7 +13,7 @@ import { LINK_DESIGN_DEFAULTS, type AtmosphereModel, type LinkDesignInput } from
 import { apertureAveragedFadeMarginDb, apertureAveragedScintillationIndexFast } from '../turbulence/scintillation.js';
 import { normalQuantileOf } from '../numeric/normal.js';
 import { rytovVarianceFast } from '../turbulence/rytov.js';
-import { beamWaveAtReceiverFast, beamWaveScintillationFast, type BeamWaveAtReceiver } from '../turbulence/beam-wave.js';
+import { beamWanderRmsFastM, beamWaveAtReceiverFast, beamWaveScintillationFast, longTermBeamRadiusFastM } from '../turbulence/beam-wave.js';
 import { DB_PER_NATURAL_LOG_POWER as DB_PER_NEPER_POWER } from '../units/constants.js';
 
 
@@ -51,6 +51,8 @@ export interface ResolvedDesign {
    * that γ = 4.343·c/V and its inverse is closed form
    */
   fogNumeratorPerKm: number;
+  /** ln(λ/550 nm), for the wavelength exponent of Kim's and Kruse's models */
+  logWavelengthRatio: number;
   /** 2 % contrast visibility [km] after any MOR conversion */
   visibility2PercentKm: number;
   morInput: boolean;
@@ -67,7 +69,7 @@ export interface ResolvedDesign {
  * jitter σθ: the exact root of Q1(θb/σθ, r_p/σθ) = p (range-free: bias and jitter both scale with L).
  * @see Marcum J.I. (1960); ricianOutageRadius.
  */
-function outageAngleRad(jitterSigmaPerAxisRad: number, staticErrorRad: number, outageProbability: number): number {
+export function outageAngleRad(jitterSigmaPerAxisRad: number, staticErrorRad: number, outageProbability: number): number {
   if (jitterSigmaPerAxisRad > 0 && staticErrorRad / jitterSigmaPerAxisRad > LARGE_OFFSET_OVER_SIGMA) {
     // A bias of very many σ: R = |ν + x + i·y| ≈ ν + x + y²/(2ν) − x·y²/(2ν²), whose p-quantile is
     // r_p ≈ ν + σz + σ²/(2ν) − σ³z/(4ν²) with z = −Φ⁻¹(p) (derived: y² at its mean in the third
@@ -88,7 +90,7 @@ const LARGE_OFFSET_OVER_SIGMA = 1000;
  * c = 0.11478λ + 3.8367, radiation c = 0.18126λ² + 0.13709λ + 3.7502; 0 for the other models.
  * @see Al Naboulsi M., Sizun H., de Fornel F., Opt. Eng. 43(2), 319–329 (2004).
  */
-function alNaboulsiNumerator(model: AtmosphereModel, wavelengthM: number): number {
+export function alNaboulsiNumerator(model: AtmosphereModel, wavelengthM: number): number {
   const fogType = model === 'al-naboulsi-advection' ? 'advection' : model === 'al-naboulsi-radiation' ? 'radiation' : undefined;
   // β·V at V = 1 km from the atmosphere module, so the coefficients live in one place.
   return fogType === undefined ? 0 : alNaboulsiFogExtinctionPerKm({ fogType, visibilityM: 1000, wavelengthM });
@@ -122,6 +124,7 @@ export function emptyResolvedDesign(): ResolvedDesign {
     atmosphereModel: 'kim',
     kruse: false,
     fogNumeratorPerKm: 0,
+    logWavelengthRatio: 0,
     visibility2PercentKm: 0,
     morInput: false,
     cn2: 0,
@@ -161,6 +164,7 @@ export function resolveDesignInto(target: ResolvedDesign, design: LinkDesignInpu
   target.atmosphereModel = model;
   target.kruse = model === 'kruse';
   target.fogNumeratorPerKm = model === 'kim' || model === 'kruse' ? 0 : alNaboulsiNumerator(model, transmitter.wavelengthM);
+  target.logWavelengthRatio = Math.log(transmitter.wavelengthM / VISIBILITY_REFERENCE_WAVELENGTH_M);
   target.visibility2PercentKm = (morInput ? atmosphere.visibilityM * VISIBILITY_2_PERCENT_PER_MOR : atmosphere.visibilityM) / 1000;
   target.morInput = morInput;
   target.cn2 = atmosphere.cn2;
@@ -179,8 +183,21 @@ export function resolveDesignInto(target: ResolvedDesign, design: LinkDesignInpu
  * @see Kim, McArthur & Korevaar, Proc. SPIE 4214 (2001); Kruse et al. (1962).
  */
 export function specificAttenuationDbPerKm(design: ResolvedDesign, visibility2PercentKm: number): number {
-  if (design.fogNumeratorPerKm > 0) return (DB_PER_NEPER_POWER * design.fogNumeratorPerKm) / visibility2PercentKm;
-  return DB_PER_NEPER_POWER * visibilityExtinctionPerKmFast(design.kruse, visibility2PercentKm, design.wavelengthM);
+  return specificAttenuationOfModelDbPerKm(design.fogNumeratorPerKm, design.kruse, design.logWavelengthRatio, visibility2PercentKm);
+}
+
+/**
+ * {@link specificAttenuationDbPerKm} from the model's numbers (the batch kernel's columns).
+ * @param fogNumeratorPerKm Al Naboulsi's c(λ) of β = c/V, or 0 for Kim/Kruse
+ * @param kruse Kruse's exponent (Kim's otherwise)
+ * @param logWavelengthRatio ln(λ/550 nm)
+ * @param visibility2PercentKm 2 % visibility [km], > 0
+ * @returns γ [dB/km]
+ * @see Kim, McArthur & Korevaar, Proc. SPIE 4214 (2001); Kruse et al. (1962); Al Naboulsi et al. (2004).
+ */
+export function specificAttenuationOfModelDbPerKm(fogNumeratorPerKm: number, kruse: boolean, logWavelengthRatio: number, visibility2PercentKm: number): number {
+  if (fogNumeratorPerKm > 0) return (DB_PER_NEPER_POWER * fogNumeratorPerKm) / visibility2PercentKm;
+  return DB_PER_NEPER_POWER * visibilityExtinctionPerKmOfLogWavelength(kruse, visibility2PercentKm, logWavelengthRatio);
 }
 
 /**
@@ -225,14 +242,19 @@ export interface ChainResult {
   beamRadiusAtReceiverM: number;
   /** long-term beam radius W_LT [m]; W when spherical-wave or Cn² = 0 */
   longTermBeamRadiusM: number;
-  /** radial rms beam wander [m]; 0 when spherical-wave or Cn² = 0 */
+  /** radial rms beam wander [m]; 0 when spherical-wave or Cn² = 0, or when not asked for */
   beamWanderRmsM: number;
-  /** 10·log10(C(0; W)/C(0; W_LT)) [dB]; 0 when spherical-wave or Cn² = 0, negative when a gain */
+  /** 10·log10(C(0; W)/C(0; W_LT)) [dB]; 0 when spherical-wave or Cn² = 0, negative when a gain; NaN at detail 'margin' */
   turbulenceBeamSpreadLossDb: number;
+  /** centred capture C(0; W); NaN at detail 'margin' */
   captureFraction: number;
+  /** NaN at detail 'margin' */
   geometricLossDb: number;
   atmosphericLossDb: number;
+  /** NaN at detail 'margin' */
   pointingLossDb: number;
+  /** the three terms the capture and the pointing make together: L_geo + spread + L_point [dB] (every detail) */
+  captureAndPointingLossDb: number;
   receivedPowerDbm: number;
   rytovVarianceSpherical: number;
   scintillationIndex: number;
@@ -240,96 +262,145 @@ export interface ChainResult {
   linkMarginDb: number;
 }
 
-// The chain's result is written into one scratch object: the callers read it at once, and the hot
-// paths (maxRange, the samplers, evaluateLink) then allocate nothing per evaluation.
-const scratch: ChainResult = {
-  beamRadiusAtReceiverM: 0,
-  longTermBeamRadiusM: 0,
-  beamWanderRmsM: 0,
-  turbulenceBeamSpreadLossDb: 0,
-  captureFraction: 0,
-  geometricLossDb: 0,
-  atmosphericLossDb: 0,
-  pointingLossDb: 0,
-  receivedPowerDbm: 0,
-  rytovVarianceSpherical: 0,
-  scintillationIndex: 0,
-  scintillationFadeMarginDb: 0,
-  linkMarginDb: 0,
-};
+/**
+ * How much of the chain to compute: `'margin'` the margin, received power, beam radii and fade
+ * margin only (the capture and pointing terms are then summed in one logarithm, the rest is NaN);
+ * `'terms'` every term as well; `'report'` also the informational beam wander.
+ */
+export type ChainDetail = 'margin' | 'terms' | 'report';
+
+/** A chain result to write into (each caller owns its own; nothing is shared between calls). */
+export function newChainResult(): ChainResult {
+  return {
+    beamRadiusAtReceiverM: Number.NaN,
+    longTermBeamRadiusM: Number.NaN,
+    beamWanderRmsM: Number.NaN,
+    turbulenceBeamSpreadLossDb: Number.NaN,
+    captureFraction: Number.NaN,
+    geometricLossDb: Number.NaN,
+    atmosphericLossDb: Number.NaN,
+    pointingLossDb: Number.NaN,
+    captureAndPointingLossDb: Number.NaN,
+    receivedPowerDbm: Number.NaN,
+    rytovVarianceSpherical: Number.NaN,
+    scintillationIndex: Number.NaN,
+    scintillationFadeMarginDb: Number.NaN,
+    linkMarginDb: Number.NaN,
+  };
+}
 
 /**
- * Evaluates P_rx = P_tx − L_tx − L_geo − γL − L_point − L_rx and M = P_rx − S − F_scint − M_system.
+ * Evaluates P_rx = P_tx − L_tx − L_geo − γL − L_point − L_rx and M = P_rx − S − F_scint − M_system
+ * into a new result (every term; the beam wander when asked for).
  *
  * @param design resolved design
  * @param rangeM path length [m], > 0
  * @param attenuationDbPerKm specific atmospheric attenuation γ [dB/km], ≥ 0
  * @param includeScintillation whether to subtract the fade margin
  * @param wanderWanted whether to compute the (informational) beam wander when the fade margin is off
- * @returns the chain's numbers, in a shared object that the next call overwrites (copy what you keep)
+ * @returns the chain's numbers (a new object)
  * @see METHODS.md §10.1; the sources of each term are in budget-terms.ts.
  */
 export function evaluateChain(design: ResolvedDesign, rangeM: number, attenuationDbPerKm: number, includeScintillation: boolean, wanderWanted = false): ChainResult {
+  return evaluateChainInto(newChainResult(), design, rangeM, attenuationDbPerKm, includeScintillation, wanderWanted ? 'report' : 'terms');
+}
+
+/**
+ * The chain of {@link evaluateChain} written into a result the caller owns, to the detail asked for
+ * (the hot paths reuse one result and ask for no more than they read).
+ *
+ * The capture and pointing terms enter the margin only through their sum, which in mean mode is
+ * −10·log10 E[C(R; W_LT)]: the geometric loss at W, the spread 10·log10(C(0; W)/C(0; W_LT)) and the
+ * pointing loss −10·log10(E[C]/C(0; W_LT)) telescope. The chain computes the margin from that sum
+ * at every detail; `'margin'` skips the split into the three terms (which sum to it to rounding,
+ * ~1e-14 dB).
+ *
+ * @param out the result to write
+ * @param design resolved design
+ * @param rangeM path length [m], > 0
+ * @param attenuationDbPerKm specific atmospheric attenuation γ [dB/km], ≥ 0
+ * @param includeScintillation whether to subtract the fade margin
+ * @param detail what to compute (see {@link ChainDetail})
+ * @returns `out`
+ * @see METHODS.md §10.1; the sources of each term are in budget-terms.ts.
+ */
+export function evaluateChainInto(out: ChainResult, design: ResolvedDesign, rangeM: number, attenuationDbPerKm: number, includeScintillation: boolean, detail: ChainDetail): ChainResult {
   const beamRadiusM = launchBeamRadiusAtRangeM(design.wavelengthM, design.apertureBeamRadiusM, design.halfAngleDivergenceRad, design.m2, rangeM);
   const apertureRadiusM = design.apertureDiameterM / 2;
-  const geometricLossDb = centredGeometricLossDb(beamRadiusM, apertureRadiusM, apertureRadiusM * design.obscurationRatio);
-  const captureFraction = annularCaptureFractionStable(beamRadiusM, apertureRadiusM, apertureRadiusM * design.obscurationRatio);
-  const atmosphericLossDb = (attenuationDbPerKm * rangeM) / 1000;
   const obscurationRadiusM = apertureRadiusM * design.obscurationRatio;
   const jitterM = design.jitterSigmaPerAxisRad * rangeM;
   const biasM = design.staticErrorRad * rangeM;
+  const beamWave = design.gaussianBeam && design.cn2 > 0;
   // Gaussian-beam model: the long-term beam (wander inside it) replaces W for capture and pointing.
-  let captureBeamRadiusM = beamRadiusM;
-  let captureLossDb = geometricLossDb;
-  let turbulenceBeamSpreadLossDb = 0;
-  let beamWanderRmsM = 0;
-  let beam: BeamWaveAtReceiver | undefined;
-  if (design.gaussianBeam && design.cn2 > 0) {
-    beam = beamWaveAtReceiverFast(design.wavelengthM, design.apertureBeamRadiusM, design.halfAngleDivergenceRad, design.m2, rangeM, design.cn2, beamRadiusM, includeScintillation || wanderWanted);
-    captureBeamRadiusM = beam.longTermBeamRadiusM;
-    beamWanderRmsM = beam.beamWanderRmsM;
+  const captureBeamRadiusM = beamWave
+    ? longTermBeamRadiusFastM(design.wavelengthM, design.apertureBeamRadiusM, design.halfAngleDivergenceRad, design.m2, rangeM, design.cn2, beamRadiusM)
+    : beamRadiusM;
+  const meanPointing = Number.isNaN(design.pointingOutageAngleRad);
+  const atmosphericLossDb = (attenuationDbPerKm * rangeM) / 1000;
+  // The capture and pointing terms enter the margin only through their sum, computed the same way at
+  // every detail, so that the batch kernel's margins equal evaluateLink's to the last bit: in mean
+  // mode −10·log10 E[C(R; W_LT)] (the centred capture loss where there is no error at all), in
+  // outage mode the centred capture loss plus the loss at the outage quantile.
+  let captureLossDb = Number.NaN;
+  let outagePointingLossDb = Number.NaN;
+  let captureAndPointingLossDb: number;
+  if (meanPointing && !(jitterM === 0 && biasM === 0)) {
+    captureAndPointingLossDb = -DB_PER_NEPER_POWER * logMeanAnnularCapture(captureBeamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM);
+  } else {
     captureLossDb = centredGeometricLossDb(captureBeamRadiusM, apertureRadiusM, obscurationRadiusM);
-    turbulenceBeamSpreadLossDb = captureLossDb - geometricLossDb;
+    if (meanPointing) captureAndPointingLossDb = captureLossDb;
+    else {
+      outagePointingLossDb = exactOutagePointingLossAtRadiusDb(captureBeamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM, design.pointingOutageProbability, design.pointingOutageAngleRad * rangeM);
+      captureAndPointingLossDb = captureLossDb + outagePointingLossDb;
+    }
   }
-  // Exact capture of the annular aperture under the Rician error, relative to the centred capture
-  // (negative when an offset puts more power on an obscured aperture). Mean mode:
-  // −10·log10(E[C]/C(0)) with 10·log10 C(0) = −captureLossDb already at hand.
-  const pointingLossDb = Number.isNaN(design.pointingOutageAngleRad)
-    ? jitterM === 0 && biasM === 0
-      ? 0
-      : -DB_PER_NEPER_POWER * logMeanAnnularCapture(captureBeamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM) - captureLossDb + 0
-    : exactOutagePointingLossAtRadiusDb(captureBeamRadiusM, apertureRadiusM, obscurationRadiusM, jitterM, biasM, design.pointingOutageProbability, design.pointingOutageAngleRad * rangeM);
-  const receivedPowerDbm =
-    design.powerDbm - design.transmitOpticsLossDb - geometricLossDb - turbulenceBeamSpreadLossDb - atmosphericLossDb - pointingLossDb - design.receiveOpticsLossDb;
+  out.captureAndPointingLossDb = captureAndPointingLossDb;
+  if (detail === 'margin') {
+    out.geometricLossDb = Number.NaN;
+    out.turbulenceBeamSpreadLossDb = Number.NaN;
+    out.pointingLossDb = Number.NaN;
+    out.captureFraction = Number.NaN;
+  } else {
+    // The split: geometric loss at W, spread to W_LT, and the pointing term relative to C(0; W_LT)
+    // (negative when an offset puts more power on an obscured aperture).
+    const geometricLossDb = centredGeometricLossDb(beamRadiusM, apertureRadiusM, obscurationRadiusM);
+    if (Number.isNaN(captureLossDb)) captureLossDb = beamWave ? centredGeometricLossDb(captureBeamRadiusM, apertureRadiusM, obscurationRadiusM) : geometricLossDb;
+    out.geometricLossDb = geometricLossDb;
+    out.turbulenceBeamSpreadLossDb = beamWave ? captureLossDb - geometricLossDb : 0;
+    out.pointingLossDb = meanPointing ? (jitterM === 0 && biasM === 0 ? 0 : captureAndPointingLossDb - captureLossDb + 0) : outagePointingLossDb;
+    out.captureFraction = annularCaptureFractionStable(beamRadiusM, apertureRadiusM, obscurationRadiusM);
+  }
+  const receivedPowerDbm = design.powerDbm - design.transmitOpticsLossDb - captureAndPointingLossDb - atmosphericLossDb - design.receiveOpticsLossDb;
   let rytovVarianceSpherical = 0;
   let scintillationIndex = 0;
   let scintillationFadeMarginDb = 0;
+  let beamWanderRmsM = 0;
   if (includeScintillation && design.cn2 > 0) {
-    rytovVarianceSpherical = rytovVarianceFast(design.cn2, design.wavelengthM, rangeM, true);
-    if (beam !== undefined) {
+    if (detail !== 'margin') rytovVarianceSpherical = rytovVarianceFast(design.cn2, design.wavelengthM, rangeM, true);
+    if (beamWave) {
       // Beam wave, aperture averaged, off axis by the bias and the wander (turbulence/beam-wave.ts).
+      const beam = beamWaveAtReceiverFast(design.wavelengthM, design.apertureBeamRadiusM, design.halfAngleDivergenceRad, design.m2, rangeM, design.cn2, beamRadiusM, true);
       const wave = beamWaveScintillationFast(design.wavelengthM, rangeM, design.apertureDiameterM, design.obscurationRatio, beam, beamRadiusM, biasM, design.fadeProbability);
+      beamWanderRmsM = beam.beamWanderRmsM;
       scintillationIndex = wave.scintillationIndex;
       scintillationFadeMarginDb = wave.fadeMarginDb;
     } else {
-    // Spherical wave, aperture averaged, gamma-gamma at p (METHODS.md §6.2, §6.6, §6.9): divergent FSO
-    // beams have Θ ≈ 0 at the receiver and behave as spherical waves.
-      scintillationIndex = apertureAveragedScintillationIndexFast(design.wavelengthM, rangeM, design.cn2, design.apertureDiameterM);
+      // Spherical wave, aperture averaged, gamma-gamma at p (METHODS.md §6.2, §6.6, §6.9): divergent FSO
+      // beams have Θ ≈ 0 at the receiver and behave as spherical waves.
+      if (detail !== 'margin') scintillationIndex = apertureAveragedScintillationIndexFast(design.wavelengthM, rangeM, design.cn2, design.apertureDiameterM);
       scintillationFadeMarginDb = apertureAveragedFadeMarginDb(design.wavelengthM, rangeM, design.cn2, design.apertureDiameterM, design.fadeProbability);
     }
+  } else if (detail === 'report' && beamWave) {
+    beamWanderRmsM = beamWanderRmsFastM(design.wavelengthM, design.apertureBeamRadiusM, design.halfAngleDivergenceRad, design.m2, rangeM, design.cn2);
   }
-  scratch.beamRadiusAtReceiverM = beamRadiusM;
-  scratch.longTermBeamRadiusM = captureBeamRadiusM;
-  scratch.beamWanderRmsM = beamWanderRmsM;
-  scratch.turbulenceBeamSpreadLossDb = turbulenceBeamSpreadLossDb;
-  scratch.captureFraction = captureFraction;
-  scratch.geometricLossDb = geometricLossDb;
-  scratch.atmosphericLossDb = atmosphericLossDb;
-  scratch.pointingLossDb = pointingLossDb;
-  scratch.receivedPowerDbm = receivedPowerDbm;
-  scratch.rytovVarianceSpherical = rytovVarianceSpherical;
-  scratch.scintillationIndex = scintillationIndex;
-  scratch.scintillationFadeMarginDb = scintillationFadeMarginDb;
-  scratch.linkMarginDb = receivedPowerDbm - design.sensitivityDbm - scintillationFadeMarginDb - design.systemMarginDb;
-  return scratch;
+  out.beamRadiusAtReceiverM = beamRadiusM;
+  out.longTermBeamRadiusM = captureBeamRadiusM;
+  out.beamWanderRmsM = beamWanderRmsM;
+  out.atmosphericLossDb = atmosphericLossDb;
+  out.receivedPowerDbm = receivedPowerDbm;
+  out.rytovVarianceSpherical = rytovVarianceSpherical;
+  out.scintillationIndex = scintillationIndex;
+  out.scintillationFadeMarginDb = scintillationFadeMarginDb;
+  out.linkMarginDb = receivedPowerDbm - design.sensitivityDbm - scintillationFadeMarginDb - design.systemMarginDb;
+  return out;
 }

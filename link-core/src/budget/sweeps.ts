@@ -3,13 +3,13 @@
  * input (a line chart) or two (a heat map), as Float64Arrays with their axis values. They generalise
  * marginVsRange and marginVsVisibility (§10.5) to any field of VARIABLE_DESIGN_FIELDS.
  *
- * Every point is `evaluateLink(withDesignValue(…))`, all in `fillMargins`: the one loop a batch
- * margin kernel replaces (same design, one or two fields, columns of values, margins out).
+ * Every point is the margin `evaluateLink(withDesignValue(…))` gives, computed by the batch margin
+ * kernel in `fillMargins` (same design, one or two fields, columns of values, margins out).
  */
 import { z } from 'zod';
 import { finiteNumber } from '../schemas/fields.js';
 import type { LinkDesignInput } from '../schemas/link-design.schema.js';
-import { evaluateLink } from './evaluate-link.js';
+import { evaluateLinkMargins, isLinkMarginPathField } from './evaluate-link-margins.js';
 import {
   designValueOf,
   InvalidInputError,
@@ -17,7 +17,6 @@ import {
   requireDesignFieldValue,
   requireValidDesign,
   VARIABLE_DESIGN_FIELDS,
-  withDesignValue,
   type VariableDesignField,
 } from './design-fields.js';
 
@@ -117,16 +116,31 @@ function describeAxis(design: LinkDesignInput, axis: z.output<typeof SweepAxisSc
 }
 
 /**
- * The inner loop of every sweep: out[j·nx + i] = margin of the design with x = xs[i] (and y = ys[j]).
- * The seam for a batch kernel: same inputs, margins out, no budget objects needed by the callers.
+ * The inner loop of every sweep: out[j·nx + i] = margin of the design with x = xs[i] (and y = ys[j]),
+ * by the batch kernel (METHODS.md §10.8; the same margins as evaluateLink, to the last bit). The
+ * kernel reuses the path part between consecutive points that share it, so where only one axis is
+ * a path field (range against visibility or power) the points are taken with that axis outer and
+ * the margins put back in row-major order.
  */
 function fillMargins(design: LinkDesignInput, x: SweepAxisValues, y: SweepAxisValues | undefined, out: Float64Array): void {
   const columns = x.values.length;
-  const rows = y?.values.length ?? 1;
-  for (let j = 0; j < rows; j++) {
-    const row = y === undefined ? design : withDesignValue(design, y.field, y.values[j]!);
-    for (let i = 0; i < columns; i++) out[j * columns + i] = evaluateLink(withDesignValue(row, x.field, x.values[i]!)).linkMarginDb;
+  if (y === undefined) {
+    evaluateLinkMargins(design, { [x.field]: x.values }, out);
+    return;
   }
+  const rows = y.values.length;
+  const xColumn = new Float64Array(columns * rows);
+  const yColumn = new Float64Array(columns * rows);
+  const xOuter = isLinkMarginPathField(x.field) && !isLinkMarginPathField(y.field);
+  for (let j = 0; j < rows; j++) {
+    for (let i = 0; i < columns; i++) {
+      const k = xOuter ? i * rows + j : j * columns + i;
+      xColumn[k] = x.values[i]!;
+      yColumn[k] = y.values[j]!;
+    }
+  }
+  const margins = evaluateLinkMargins(design, { [x.field]: xColumn, [y.field]: yColumn });
+  for (let j = 0; j < rows; j++) for (let i = 0; i < columns; i++) out[j * columns + i] = margins[xOuter ? i * rows + j : j * columns + i]!;
 }
 
 /**

@@ -6,7 +6,7 @@
  */
 import erf from '@stdlib/math-base-special-erf';
 import { besselI0Scaled } from '../numeric/bessel.js';
-import { logNoncentralChiSquare2TailsScaled, marcumQ1Complement, noncentralChiSquare2TailsFast } from '../numeric/marcum-q.js';
+import { logNoncentralChiSquare2TailsScaled, marcumQ1Complement, noncentralChiSquare2CdfFast, noncentralChiSquare2SfFast } from '../numeric/marcum-q.js';
 import { integrate } from '../numeric/quadrature.js';
 import { findRootBrent } from '../numeric/root-finding.js';
 import { fractionToLossDb } from '../units/decibels.js';
@@ -299,7 +299,7 @@ const SMALLEST_LINEAR_PROBABILITY = 1e-250;
  * ν = offset) and the mean capture under Rician pointing error (s² = W²/4 + σ²: the beam profile
  * and the jitter convolve into one Gaussian). Plain-number hot-path form, no validation.
  *
- * Fast path: the positive-term Poisson series of noncentralChiSquare2TailsFast for each radius,
+ * Fast path: the positive-term Poisson series (noncentralChiSquare2CdfFast, …SfFast) for each radius,
  * differenced on the smaller tails (no cancellation beyond that of the annulus itself). Where the
  * result would leave the doubles (an obscuration far larger than s, or offsets of hundreds of s) it
  * switches to quadrature of the Rice density in the log domain, so the answer stays finite.
@@ -318,18 +318,23 @@ export function logRicianAnnulusProbability(offsetM: number, sigmaM: number, inn
   const outer = outerRadiusM / sigmaM;
   if (offset === 0) return -0.5 * inner * inner + Math.log(-Math.expm1(-0.5 * (outer - inner) * (outer + inner)));
   const noncentrality = offset * offset;
-  const outerTails = noncentralChiSquare2TailsFast(outer * outer, noncentrality);
-  const outerCdf = outerTails.cdf;
-  const outerSf = outerTails.sf;
-  let probability: number;
-  if (inner === 0) {
-    probability = outerCdf;
-  } else {
-    const innerTails = noncentralChiSquare2TailsFast(inner * inner, noncentrality);
-    // Difference the smaller tails: survival functions when b lies beyond the bulk (y_b ≥ μ + 1).
-    probability = inner * inner >= noncentrality + 2 ? innerTails.sf - outerSf : outerCdf - innerTails.cdf;
-  }
+  // Difference the smaller tails: survival functions when b lies beyond the bulk (y_b ≥ μ + 1).
+  const probability =
+    inner === 0
+      ? noncentralChiSquare2CdfFast(outer * outer, noncentrality)
+      : inner * inner >= noncentrality + 2
+        ? noncentralChiSquare2SfFast(inner * inner, noncentrality) - noncentralChiSquare2SfFast(outer * outer, noncentrality)
+        : noncentralChiSquare2CdfFast(outer * outer, noncentrality) - noncentralChiSquare2CdfFast(inner * inner, noncentrality);
   if (probability > SMALLEST_LINEAR_PROBABILITY) return Math.log(probability);
+  return logRicianAnnulusBeyondTheDoubles(offset, noncentrality, inner, outer);
+}
+
+/**
+ * {@link logRicianAnnulusProbability} where the difference of the tails leaves the doubles: the
+ * log-domain series, then the quadrature (kept out of the common path so that it stays small
+ * enough for the JIT to compile into its callers).
+ */
+function logRicianAnnulusBeyondTheDoubles(offset: number, noncentrality: number, inner: number, outer: number): number {
   const logScaled = logRicianAnnulusByScaledSeries(noncentrality, inner, outer);
   // finite unless one of its plain factors underflowed (offsets of thousands of s): integrate then
   if (Number.isFinite(logScaled)) return logScaled;

@@ -53,38 +53,14 @@ const FAST_SERIES_EXPONENT_LIMIT = 650;
 // 1/i for the series' first terms: a multiplication is cheaper than a division in the hot loop.
 const RECIPROCALS = Float64Array.from({ length: 256 }, (_, i) => (i === 0 ? 0 : 1 / i));
 
-// Scratch of the fast series (the hot path allocates nothing).
-const fastTails: NoncentralChiSquareTails = { cdf: 0, sf: 0 };
-
 /**
- * Both tails of the noncentral chi-square (2 degrees of freedom) by sums of positive terms only,
- * with no special function but one exp per argument, for μ + y ≤ 650 (μ = λ/2, y = x/2):
- *   cdf = Σ_{i≥1} Pois(i; y)·P(N_μ ≤ i − 1),  sf = Σ_{j≥0} Pois(j; μ)·P(N_y ≤ j),
- * the Poisson-mixture form with the incomplete gamma of integer order written as a Poisson CDF
- * (P(j+1, y) = P(N_y > j)) and the double sum ordered so that both inner sums grow by additions.
- * The smaller tail is summed (relative precision near machine epsilon, down to ~1e-280); the other
- * is 1 minus it. Returns a shared object that the next call overwrites. NaN tails when outside the
- * fast domain (the caller falls back).
- * @see Johnson, Kotz & Balakrishnan (1995), ch. 29 (Poisson mixture); the reordering is derived.
+ * The smaller tail of the noncentral chi-square (2 degrees of freedom) for μ = λ/2 > 0 and
+ * y = x/2 > 0 with μ + y ≤ 650: P(X ≤ x) when y < μ + 1, P(X > x) otherwise, by sums of positive
+ * terms only:
+ *   cdf = Σ_{i≥1} Pois(i; y)·P(N_μ ≤ i − 1),  sf = Σ_{j≥0} Pois(j; μ)·P(N_y ≤ j).
+ * One exp, no special function; relative precision near machine epsilon down to ~1e-280.
  */
-export function noncentralChiSquare2TailsFast(x: number, noncentrality: number): NoncentralChiSquareTails {
-  const mu = noncentrality / 2;
-  const y = x / 2;
-  if (y === 0) {
-    fastTails.cdf = 0;
-    fastTails.sf = 1;
-    return fastTails;
-  }
-  if (mu === 0) {
-    fastTails.sf = Math.exp(-y);
-    fastTails.cdf = -Math.expm1(-y);
-    return fastTails;
-  }
-  if (!(mu + y <= FAST_SERIES_EXPONENT_LIMIT)) {
-    fastTails.cdf = Number.NaN;
-    fastTails.sf = Number.NaN;
-    return fastTails;
-  }
+function smallerTailSeries(mu: number, y: number): number {
   // Both Poisson weights carry the common factor e^(−μ−y): sum without it (the sums stay below
   // e^(μ+y) ≤ e^650, inside the doubles) and apply it once at the end.
   const scale = Math.exp(-mu - y);
@@ -107,9 +83,7 @@ export function noncentralChiSquare2TailsFast(x: number, noncentrality: number):
       poissonMu *= mu * inverse;
       cdfMu += poissonMu;
     }
-    fastTails.cdf = sum * scale;
-    fastTails.sf = 1 - fastTails.cdf;
-    return fastTails;
+    return sum * scale;
   }
   // sf: Σ_{j≥0} Pois(j; μ)·F_y(j). Term ratio ≤ ρ_j = μ(1 + y/(j+1))/(j+1), so once ρ < 1 the rest
   // is below term·ρ/(1 − ρ).
@@ -129,9 +103,72 @@ export function noncentralChiSquare2TailsFast(x: number, noncentrality: number):
     const room = (j + 1) * (j + 1) - growth;
     if (room > 0 && term * growth <= 1e-17 * room * sum) break;
   }
-  fastTails.sf = sum * scale;
-  fastTails.cdf = 1 - fastTails.sf;
-  return fastTails;
+  return sum * scale;
+}
+
+/**
+ * P(X ≤ x) of the noncentral chi-square with 2 degrees of freedom, by the positive-term series of
+ * {@link noncentralChiSquare2TailsFast}: full relative precision when it is the smaller tail
+ * (x/2 < λ/2 + 1), 1 minus the survival function otherwise. A plain number (nothing allocated);
+ * NaN for λ/2 + x/2 > 650, where the caller falls back.
+ *
+ * @param x evaluation point, ≥ 0
+ * @param noncentrality λ ≥ 0
+ * @returns P(X ≤ x) in [0, 1], or NaN outside the fast domain
+ * @see Johnson, Kotz & Balakrishnan (1995), ch. 29 (Poisson mixture); the reordering is derived.
+ */
+export function noncentralChiSquare2CdfFast(x: number, noncentrality: number): number {
+  const mu = noncentrality / 2;
+  const y = x / 2;
+  if (y === 0) return 0;
+  if (mu === 0) return -Math.expm1(-y);
+  if (!(mu + y <= FAST_SERIES_EXPONENT_LIMIT)) return Number.NaN;
+  const smaller = smallerTailSeries(mu, y);
+  return y < mu + 1 ? smaller : 1 - smaller;
+}
+
+/**
+ * P(X > x) of the noncentral chi-square with 2 degrees of freedom: Q1(√λ, √x). The counterpart of
+ * {@link noncentralChiSquare2CdfFast} (full relative precision when it is the smaller tail).
+ *
+ * @param x evaluation point, ≥ 0
+ * @param noncentrality λ ≥ 0
+ * @returns P(X > x) in [0, 1], or NaN outside the fast domain
+ * @see Johnson, Kotz & Balakrishnan (1995), ch. 29; Marcum (1960).
+ */
+export function noncentralChiSquare2SfFast(x: number, noncentrality: number): number {
+  const mu = noncentrality / 2;
+  const y = x / 2;
+  if (y === 0) return 1;
+  if (mu === 0) return Math.exp(-y);
+  if (!(mu + y <= FAST_SERIES_EXPONENT_LIMIT)) return Number.NaN;
+  const smaller = smallerTailSeries(mu, y);
+  return y < mu + 1 ? 1 - smaller : smaller;
+}
+
+/**
+ * Both tails of the noncentral chi-square (2 degrees of freedom) by sums of positive terms only,
+ * with no special function but one exp per argument, for μ + y ≤ 650 (μ = λ/2, y = x/2):
+ *   cdf = Σ_{i≥1} Pois(i; y)·P(N_μ ≤ i − 1),  sf = Σ_{j≥0} Pois(j; μ)·P(N_y ≤ j),
+ * the Poisson-mixture form with the incomplete gamma of integer order written as a Poisson CDF
+ * (P(j+1, y) = P(N_y > j)) and the double sum ordered so that both inner sums grow by additions.
+ * The smaller tail is summed (relative precision near machine epsilon, down to ~1e-280); the other
+ * is 1 minus it. NaN tails when outside the fast domain (the caller falls back). The hot paths use
+ * {@link noncentralChiSquare2CdfFast} and {@link noncentralChiSquare2SfFast}, which return plain numbers.
+ *
+ * @param x evaluation point, ≥ 0
+ * @param noncentrality λ ≥ 0
+ * @returns `{ cdf, sf }` (a new object)
+ * @see Johnson, Kotz & Balakrishnan (1995), ch. 29 (Poisson mixture); the reordering is derived.
+ */
+export function noncentralChiSquare2TailsFast(x: number, noncentrality: number): NoncentralChiSquareTails {
+  const mu = noncentrality / 2;
+  const y = x / 2;
+  if (y === 0) return { cdf: 0, sf: 1 };
+  if (mu === 0) return { cdf: -Math.expm1(-y), sf: Math.exp(-y) };
+  if (!(mu + y <= FAST_SERIES_EXPONENT_LIMIT)) return { cdf: Number.NaN, sf: Number.NaN };
+  const smaller = smallerTailSeries(mu, y);
+  return y < mu + 1 ? { cdf: smaller, sf: 1 - smaller } : { cdf: 1 - smaller, sf: smaller };
 }
 
 /** Log tails of {@link logNoncentralChiSquare2TailsScaled}. */
@@ -141,7 +178,6 @@ export interface LogTails {
   /** ln P(X > x) */
   logSf: number;
 }
-const logTails: LogTails = { logCdf: 0, logSf: 0 };
 /** Past this the plain (unscaled) factor of the scaled series would leave the doubles. */
 const SCALED_SERIES_PLAIN_LIMIT = 600;
 const SCALED_SERIES_TERM_LIMIT = 1e6;
@@ -154,8 +190,7 @@ const LOG_RESCALE = 250 * Math.LN10;
  * that it holds where e^(−μ−y) leaves the doubles (offsets or radii of tens to thousands of σ):
  * the smaller tail keeps full relative precision however small. Needs y ≤ 600 for the cdf branch
  * (y < μ + 1) and μ ≤ 600 for the sf branch, and μ + y ≤ 1e6; NaN tails outside, or −∞ where a
- * plain factor underflowed (the caller integrates instead).
- * Returns a shared object that the next call overwrites.
+ * plain factor underflowed (the caller integrates instead). Returns a new object.
  * @see Johnson, Kotz & Balakrishnan (1995), ch. 29 (Poisson mixture); the reordering is derived.
  */
 export function logNoncentralChiSquare2TailsScaled(x: number, noncentrality: number): LogTails {
@@ -163,15 +198,11 @@ export function logNoncentralChiSquare2TailsScaled(x: number, noncentrality: num
   const y = x / 2;
   if (!(mu + y <= SCALED_SERIES_TERM_LIMIT)) {
     // about √(μy) terms: past this the quadrature is the cheaper path
-    logTails.logCdf = Number.NaN;
-    logTails.logSf = Number.NaN;
-    return logTails;
+    return { logCdf: Number.NaN, logSf: Number.NaN };
   }
   if (y < mu + 1) {
     if (!(y <= SCALED_SERIES_PLAIN_LIMIT) || y === 0) {
-      logTails.logCdf = y === 0 ? -Infinity : Number.NaN;
-      logTails.logSf = y === 0 ? 0 : Number.NaN;
-      return logTails;
+      return y === 0 ? { logCdf: -Infinity, logSf: 0 } : { logCdf: Number.NaN, logSf: Number.NaN };
     }
     let poissonMu = 1;
     let cdfMu = 1;
@@ -194,14 +225,11 @@ export function logNoncentralChiSquare2TailsScaled(x: number, noncentrality: num
         logScale += LOG_RESCALE;
       }
     }
-    logTails.logCdf = Math.log(sum) + logScale - mu - y;
-    logTails.logSf = Math.log1p(-Math.exp(logTails.logCdf));
-    return logTails;
+    const logCdf = Math.log(sum) + logScale - mu - y;
+    return { logCdf, logSf: Math.log1p(-Math.exp(logCdf)) };
   }
   if (!(mu <= SCALED_SERIES_PLAIN_LIMIT)) {
-    logTails.logCdf = Number.NaN;
-    logTails.logSf = Number.NaN;
-    return logTails;
+    return { logCdf: Number.NaN, logSf: Number.NaN };
   }
   let poissonMu = 1;
   let poissonY = 1;
@@ -224,9 +252,8 @@ export function logNoncentralChiSquare2TailsScaled(x: number, noncentrality: num
       logScale += LOG_RESCALE;
     }
   }
-  logTails.logSf = Math.log(sum) + logScale - mu - y;
-  logTails.logCdf = Math.log1p(-Math.exp(logTails.logSf));
-  return logTails;
+  const logSf = Math.log(sum) + logScale - mu - y;
+  return { logCdf: Math.log1p(-Math.exp(logSf)), logSf };
 }
 
 // The Rice density is about 1σ wide: split long intervals into panels of at most 2σ so that no

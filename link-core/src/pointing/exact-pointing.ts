@@ -5,7 +5,7 @@
  * is about the size of the beam, an offset moves power onto the annulus and the term is a gain.
  */
 import { logCentredAnnularCapture, logMeanAnnularCapture, logOffsetAnnularCapture } from '../capture/capture.js';
-import { marcumQ1, marcumQ1Complement, noncentralChiSquare2TailsFast } from '../numeric/marcum-q.js';
+import { marcumQ1, marcumQ1Complement, noncentralChiSquare2SfFast } from '../numeric/marcum-q.js';
 import { findRootBrent } from '../numeric/root-finding.js';
 import { DB_PER_NATURAL_LOG_POWER } from '../units/constants.js';
 import { rayleighThresholdOverSigma } from './pointing.js';
@@ -48,34 +48,96 @@ export function ricianOutageRadius(jitterSigmaPerAxisM: number, staticOffsetM: n
   const offset = staticOffsetM / jitterSigmaPerAxisM;
   const rayleigh = rayleighThresholdOverSigma(outageProbability);
   if (offset === 0) return rayleigh * jitterSigmaPerAxisM;
-  const logP = Math.log(outageProbability);
   // Bracket: R is stochastically larger than without bias (r_p ≥ √(−2 ln p)); P(R > ν + t) ≥
   // P(X₁ > t) gives r_p ≥ ν − Φ⁻¹(p); and |ν + X| ≤ ν + |X| gives r_p ≤ ν + √(−2 ln p) (σ units).
-  let lower = Math.max(rayleigh, offset - normalQuantileOf(outageProbability)) * (1 - 1e-12);
-  let upper = (offset + rayleigh) * (1 + 1e-12);
-  const noncentrality = offset * offset;
-  // Newton on ln Q1(a, r) − ln p (slope −f_Rice(r)/Q1), kept inside the bracket by bisection.
+  const lower = Math.max(rayleigh, offset - normalQuantileOf(outageProbability));
+  const upper = offset + rayleigh;
   // Start at the midpoint, or for a large bias at its Gaussian limit ν − Φ⁻¹(p) + 1/(2ν) (σ units),
   // which is already close: one or two Newton steps then reach the root.
   const gaussianLimit = offset - normalQuantileOf(outageProbability) + 0.5 / offset;
-  let r = offset > 10 && gaussianLimit > lower && gaussianLimit < upper ? gaussianLimit : 0.5 * (lower + upper);
+  const start = offset > 10 && gaussianLimit > lower && gaussianLimit < upper ? gaussianLimit : 0.5 * (lower + upper);
+  return ricianOutageRadiusOverSigmaWithin(offset, outageProbability, lower, upper, start) * jitterSigmaPerAxisM;
+}
+
+/**
+ * r_p/σ solved inside a bracket [lower, upper] (σ units) that holds it, from a start inside it:
+ * Newton on ln Q1(a, r) − ln p (slope −f_Rice(r)/Q1), kept inside the bracket by bisection, to
+ * 1e-13 relative. A narrow bracket with a close start (a table, see {@link ricianOutageRadiusTable})
+ * needs one or two steps.
+ *
+ * @param offsetOverSigma ν/σ, > 0
+ * @param outageProbability p in (0, 1)
+ * @param lower a radius over σ with Q1(ν/σ, lower) ≥ p
+ * @param upper a radius over σ with Q1(ν/σ, upper) ≤ p
+ * @param start the first iterate, in [lower, upper]
+ * @returns r_p/σ
+ * @see Marcum J.I., IRE Trans. Inf. Theory IT-6(2), 59–267 (1960).
+ */
+export function ricianOutageRadiusOverSigmaWithin(offsetOverSigma: number, outageProbability: number, lower: number, upper: number, start: number): number {
+  const logP = Math.log(outageProbability);
+  const noncentrality = offsetOverSigma * offsetOverSigma;
+  let low = lower * (1 - 1e-12);
+  let high = upper * (1 + 1e-12);
+  let r = start;
   for (let i = 0; i < 100; i++) {
     // the allocation-free series where it applies, the general Q1 (quadrature for large offsets) elsewhere
-    const sf = noncentralChiSquare2TailsFast(r * r, noncentrality).sf;
-    const residual = Math.log(sf === sf ? sf : marcumQ1(offset, r)) - logP;
-    if (residual > 0) lower = r;
-    else upper = r;
-    const density = r * Math.exp(-0.5 * (r - offset) * (r - offset)) * besselI0Scaled(offset * r);
+    const sf = noncentralChiSquare2SfFast(r * r, noncentrality);
+    const residual = Math.log(sf === sf ? sf : marcumQ1(offsetOverSigma, r)) - logP;
+    if (residual > 0) low = r;
+    else high = r;
+    const density = r * Math.exp(-0.5 * (r - offsetOverSigma) * (r - offsetOverSigma)) * besselI0Scaled(offsetOverSigma * r);
     const slope = -density / Math.exp(residual + logP);
     let next = r - residual / slope;
-    if (!(next > lower && next < upper)) next = 0.5 * (lower + upper);
-    if (Math.abs(next - r) <= 1e-13 * r || upper - lower <= 1e-13 * upper) {
-      r = next;
-      break;
-    }
+    // A Newton step this small is the root (it may land on the bracket's end, which r just became:
+    // test before the bisection fallback, which would otherwise halve the whole bracket again).
+    if (Math.abs(next - r) <= 1e-13 * r) return next;
+    if (!(next > low && next < high)) next = 0.5 * (low + high);
+    if (Math.abs(next - r) <= 1e-13 * r || high - low <= 1e-13 * high) return next;
     r = next;
   }
-  return r * jitterSigmaPerAxisM;
+  return r;
+}
+
+/** r_p/σ tabulated against ν/σ at a fixed probability (see {@link ricianOutageRadiusTable}). */
+export interface RicianOutageRadiusTable {
+  /** the probability p the radii are exceeded with */
+  outageProbability: number;
+  /** spacing of ν/σ between entries */
+  offsetStep: number;
+  /** r_p/σ at ν/σ = i·offsetStep, i = 0 … length − 1, each solved to 1e-13 relative */
+  radiiOverSigma: Float64Array;
+}
+
+/**
+ * The radius exceeded with probability p by a Rician error, r_p/σ, at evenly spaced offsets ν/σ.
+ * Q1(a, b) increases with a for b > 0 (a larger offset moves the whole distribution outwards), so
+ * r_p/σ increases with ν/σ and [radii[i], radii[i + 1]] brackets r_p/σ for every ν/σ between the
+ * two entries' offsets: a rigorous bracket from one lookup, and with the linear interpolation a
+ * start within about step²/10 of the root.
+ *
+ * @param outageProbability p in (0, 1)
+ * @param offsetStep spacing of ν/σ, > 0
+ * @param count number of entries, ≥ 2
+ * @returns the table
+ * @see Marcum J.I. (1960); monotonicity of Q1 in its first argument (e.g. Simon M.K., Alouini M.-S.,
+ *   "Digital Communication over Fading Channels", 2nd ed., Wiley (2005), §4.2) [from memory].
+ */
+export function ricianOutageRadiusTable(outageProbability: number, offsetStep: number, count: number): RicianOutageRadiusTable {
+  const radiiOverSigma = new Float64Array(count);
+  const rayleigh = rayleighThresholdOverSigma(outageProbability);
+  const normal = -normalQuantileOf(outageProbability);
+  radiiOverSigma[0] = rayleigh;
+  for (let i = 1; i < count; i++) {
+    const offset = i * offsetStep;
+    // r_p grows with the offset: the previous entry is a lower bound, and the straight line
+    // through the previous two a start within about step² of the root (one or two Newton steps).
+    const previous = radiiOverSigma[i - 1]!;
+    const lower = Math.max(previous, offset + normal);
+    const upper = offset + rayleigh;
+    const extrapolated = i > 1 ? 2 * previous - radiiOverSigma[i - 2]! : previous + 0.5 * offsetStep;
+    radiiOverSigma[i] = ricianOutageRadiusOverSigmaWithin(offset, outageProbability, lower, upper, Math.min(Math.max(extrapolated, lower), upper));
+  }
+  return { outageProbability, offsetStep, radiiOverSigma };
 }
 
 /**

@@ -2,8 +2,8 @@
  * The Gaussian-beam (beam-wave) turbulence model of the budget: the launched beam's output-plane
  * parameters Θ, Λ at the receiver, its long-term radius W_LT (spreading, with beam wander inside
  * it), the rms beam wander for information, and the aperture-averaged beam-wave scintillation
- * (on and off the beam axis) with the gamma-gamma fade margin. Allocation-free hot-path forms that
- * write into one shared result object.
+ * (on and off the beam axis) with the gamma-gamma fade margin. The budget's hot path uses the
+ * plain-number forms (long-term radius, wander); the object forms return a new object per call.
  */
 import { gaussianBeamRytovRatio } from './gaussian-beam-scintillation.js';
 import { fadeMarginGammaGammaDb } from './fade-statistics.js';
@@ -21,8 +21,6 @@ export interface BeamWaveAtReceiver {
   /** Radial rms beam wander √⟨r_c²⟩ [m], for information (contained in W_LT). */
   beamWanderRmsM: number;
 }
-
-const result: BeamWaveAtReceiver = { theta: 0, lambda: 0, planeRytovVariance: 0, longTermBeamRadiusM: 0, beamWanderRmsM: 0 };
 
 /** Exponent of the smooth maximum that joins the weak and strong long-term spreads. */
 export const LONG_TERM_SPREAD_BRIDGE_EXPONENT = 6;
@@ -78,7 +76,7 @@ function wanderHypergeometric(z: number): number {
  * @param cn2 Cn² [m^(−2/3)], ≥ 0
  * @param beamRadiusM free-space W(L) [m] (as computed by the launch)
  * @param withWander whether to compute the wander (0 otherwise; the margin without scintillation does not need it)
- * @returns a shared object (the next call overwrites it)
+ * @returns the beam's numbers (a new object)
  * @see Andrews L.C., Phillips R.L., "Laser Beam Propagation through Random Media", 2nd ed., SPIE
  *   Press (2005): ch. 4 (Θ0, Λ0, Θ, Λ), ch. 6 (long-term spread, weak 1.33 and strong 1.63; beam
  *   wander with the 2F1 factor) [equation numbers and coefficients from memory; the 1.33 is checked
@@ -95,31 +93,100 @@ export function beamWaveAtReceiverFast(
   beamRadiusM: number,
   withWander: boolean,
 ): BeamWaveAtReceiver {
+  const theta0 = launchTheta0(wavelengthM, apertureBeamRadiusM, halfAngleDivergenceRad, m2, rangeM);
+  const lambda0 = launchLambda0(wavelengthM, apertureBeamRadiusM, m2, rangeM);
+  const norm = theta0 * theta0 + lambda0 * lambda0;
+  const lambda = lambda0 / norm;
+  const planeRytovVariance = cn2 === 0 ? 0 : planeRytovVarianceOfPath(cn2, wavelengthM, rangeM);
+  return {
+    theta: theta0 / norm,
+    lambda,
+    planeRytovVariance,
+    longTermBeamRadiusM: cn2 === 0 ? beamRadiusM : beamRadiusM * Math.sqrt(1 + longTermSpread(planeRytovVariance, lambda)),
+    beamWanderRmsM: withWander && cn2 !== 0 ? beamWanderRmsOfLaunch(cn2, apertureBeamRadiusM, rangeM, theta0) : 0,
+  };
+}
+
+/** Θ0 = 1 − L/F0 of the launched beam: 1 + L·√(θ² − θd²)/W0 when defocused, 1 when collimated. */
+function launchTheta0(wavelengthM: number, apertureBeamRadiusM: number, halfAngleDivergenceRad: number, m2: number, rangeM: number): number {
   const diffractionRad = (m2 * wavelengthM) / (Math.PI * apertureBeamRadiusM);
   const excess = halfAngleDivergenceRad * halfAngleDivergenceRad - diffractionRad * diffractionRad;
-  const theta0 = excess > 0 ? 1 + (rangeM * Math.sqrt(excess)) / apertureBeamRadiusM : 1;
-  const lambda0 = (diffractionRad * rangeM) / apertureBeamRadiusM;
-  const norm = theta0 * theta0 + lambda0 * lambda0;
-  result.theta = theta0 / norm;
-  result.lambda = lambda0 / norm;
-  if (cn2 === 0) {
-    result.planeRytovVariance = 0;
-    result.longTermBeamRadiusM = beamRadiusM;
-    result.beamWanderRmsM = 0;
-    return result;
-  }
-  // Sixth roots as cbrt(sqrt(·)) (cheaper than Math.pow on the hot path): k^(7/6)·L^(11/6) =
-  // k·L²·(k/L)^(1/6) and Λ^(5/6) = Λ/Λ^(1/6).
+  return excess > 0 ? 1 + (rangeM * Math.sqrt(excess)) / apertureBeamRadiusM : 1;
+}
+
+/** Λ0 = θd·L/W0 = 2M²L/(kW0²) of the launched beam. */
+function launchLambda0(wavelengthM: number, apertureBeamRadiusM: number, m2: number, rangeM: number): number {
+  return (((m2 * wavelengthM) / (Math.PI * apertureBeamRadiusM)) * rangeM) / apertureBeamRadiusM;
+}
+
+/**
+ * σ_R² = 1.23·Cn²·k^(7/6)·L^(11/6), written as k·L²·(k/L)^(1/6) with the sixth root as
+ * cbrt(sqrt(·)) (cheaper than Math.pow on the hot path).
+ */
+function planeRytovVarianceOfPath(cn2: number, wavelengthM: number, rangeM: number): number {
   const k = (2 * Math.PI) / wavelengthM;
-  const rytov = 1.23 * cn2 * k * rangeM * rangeM * Math.cbrt(Math.sqrt(k / rangeM));
-  result.planeRytovVariance = rytov;
-  // T = (T_w⁶ + T_s⁶)^(1/6) = T_w·(1 + (T_s/T_w)⁶)^(1/6), and (T_s/T_w)⁶ = (1.63/1.33)⁶·σ_R^(12/5)·Λ.
-  const lambda = result.lambda;
-  const weak = lambda === 0 ? 0 : (1.33 * rytov * lambda) / Math.cbrt(Math.sqrt(lambda));
-  const spread = weak === 0 ? 0 : weak * Math.cbrt(Math.sqrt(1 + STRONG_OVER_WEAK_SIXTH * Math.pow(rytov, 1.2) * lambda));
-  result.longTermBeamRadiusM = beamRadiusM * Math.sqrt(1 + spread);
-  result.beamWanderRmsM = withWander ? Math.sqrt(2.42 * cn2 * rangeM * rangeM * rangeM * (1 / Math.cbrt(apertureBeamRadiusM)) * wanderHypergeometric(1 - theta0)) : 0;
-  return result;
+  return 1.23 * cn2 * k * rangeM * rangeM * Math.cbrt(Math.sqrt(k / rangeM));
+}
+
+/**
+ * T = (T_w⁶ + T_s⁶)^(1/6) = T_w·(1 + (T_s/T_w)⁶)^(1/6), (T_s/T_w)⁶ = (1.63/1.33)⁶·σ_R^(12/5)·Λ, with
+ * Λ^(5/6) = Λ/Λ^(1/6) and σ_R^(12/5) = exp(1.2·ln σ_R²) (Math.pow costs several times more here).
+ */
+function longTermSpread(planeRytovVariance: number, lambda: number): number {
+  const weak = lambda === 0 ? 0 : (1.33 * planeRytovVariance * lambda) / Math.cbrt(Math.sqrt(lambda));
+  return weak === 0 ? 0 : weak * Math.cbrt(Math.sqrt(1 + STRONG_OVER_WEAK_SIXTH * Math.exp(1.2 * Math.log(planeRytovVariance)) * lambda));
+}
+
+/** √⟨r_c²⟩ = √(2.42·Cn²·L³·W0^(−1/3)·2F1(1/3, 1; 4; 1 − |Θ0|)) [m]. */
+function beamWanderRmsOfLaunch(cn2: number, apertureBeamRadiusM: number, rangeM: number, theta0: number): number {
+  return Math.sqrt(2.42 * cn2 * rangeM * rangeM * rangeM * (1 / Math.cbrt(apertureBeamRadiusM)) * wanderHypergeometric(1 - theta0));
+}
+
+/**
+ * The long-term beam radius W_LT of {@link beamWaveAtReceiverFast} as a plain number (the budget's
+ * hot path: nothing allocated).
+ *
+ * @param wavelengthM λ [m], > 0
+ * @param apertureBeamRadiusM W0 [m], > 0
+ * @param halfAngleDivergenceRad datasheet half-angle θ [rad], ≥ 0
+ * @param m2 M² ≥ 1
+ * @param rangeM L [m], > 0
+ * @param cn2 Cn² [m^(−2/3)], ≥ 0
+ * @param beamRadiusM free-space W(L) [m] (as computed by the launch)
+ * @returns W_LT [m], ≥ W; W when Cn² = 0
+ * @see {@link beamWaveAtReceiverFast}; Andrews & Phillips (2005), ch. 6.
+ */
+export function longTermBeamRadiusFastM(
+  wavelengthM: number,
+  apertureBeamRadiusM: number,
+  halfAngleDivergenceRad: number,
+  m2: number,
+  rangeM: number,
+  cn2: number,
+  beamRadiusM: number,
+): number {
+  if (cn2 === 0) return beamRadiusM;
+  const theta0 = launchTheta0(wavelengthM, apertureBeamRadiusM, halfAngleDivergenceRad, m2, rangeM);
+  const lambda0 = launchLambda0(wavelengthM, apertureBeamRadiusM, m2, rangeM);
+  const lambda = lambda0 / (theta0 * theta0 + lambda0 * lambda0);
+  return beamRadiusM * Math.sqrt(1 + longTermSpread(planeRytovVarianceOfPath(cn2, wavelengthM, rangeM), lambda));
+}
+
+/**
+ * The radial rms beam wander of {@link beamWaveAtReceiverFast} as a plain number.
+ *
+ * @param wavelengthM λ [m], > 0
+ * @param apertureBeamRadiusM W0 [m], > 0
+ * @param halfAngleDivergenceRad datasheet half-angle θ [rad], ≥ 0
+ * @param m2 M² ≥ 1
+ * @param rangeM L [m], > 0
+ * @param cn2 Cn² [m^(−2/3)], ≥ 0
+ * @returns √⟨r_c²⟩ [m], ≥ 0; 0 when Cn² = 0
+ * @see {@link beamWaveAtReceiverFast}; Andrews & Phillips (2005), ch. 6.
+ */
+export function beamWanderRmsFastM(wavelengthM: number, apertureBeamRadiusM: number, halfAngleDivergenceRad: number, m2: number, rangeM: number, cn2: number): number {
+  if (cn2 === 0) return 0;
+  return beamWanderRmsOfLaunch(cn2, apertureBeamRadiusM, rangeM, launchTheta0(wavelengthM, apertureBeamRadiusM, halfAngleDivergenceRad, m2, rangeM));
 }
 
 /**
@@ -148,7 +215,7 @@ export function beamWaveAtReceiverFast(
  * @param offAxisOffsetM static bias at the receiver ν [m], ≥ 0
  * @param probability fade probability p in (0, 1), or NaN to skip the margin
  * @returns σ_I²(D) in `scintillationIndex`, the margin [dB] in `fadeMarginDb` and the gamma-gamma
- *   α, β (Infinity without turbulence), in a shared object
+ *   α, β (Infinity without turbulence), in a new object
  * @see Andrews & Phillips (2005), ch. 8 (σ_B², off-axis radial term 4.42σ_R²Λ^(5/6)r²/W²), ch. 9–10
  *   (all-regime and aperture-averaged log variances) [from memory]; Al-Habash, Andrews & Phillips,
  *   Opt. Eng. 40(8), 1554–1562 (2001) (gamma-gamma).
@@ -164,13 +231,7 @@ export function beamWaveScintillationFast(
   probability: number,
 ): { scintillationIndex: number; fadeMarginDb: number; alpha: number; beta: number } {
   const rytov = beam.planeRytovVariance;
-  if (rytov === 0) {
-    scintillation.scintillationIndex = 0;
-    scintillation.fadeMarginDb = 0;
-    scintillation.alpha = Infinity;
-    scintillation.beta = Infinity;
-    return scintillation;
-  }
+  if (rytov === 0) return { scintillationIndex: 0, fadeMarginDb: 0, alpha: Infinity, beta: Infinity };
   const onAxis = rytov * gaussianBeamRytovRatio(beam.theta, beam.lambda);
   // Off axis by the bias and the wander, measured against the long-term beam that contains the wander.
   const longTerm = beam.longTermBeamRadiusM;
@@ -181,11 +242,12 @@ export function beamWaveScintillationFast(
   const largeDenominator = Math.pow(1 + (0.18 + 0.47 * beam.theta) * apertureD2 + 0.56 * (1 + beam.theta) * s125, 7 / 6);
   const largeScale = (0.49 * weakIndex) / largeDenominator;
   const smallScale = (0.51 * weakIndex * Math.pow(1 + 0.69 * s125, -5 / 6)) / (1 + 0.9 * apertureD2 + 0.62 * apertureD2 * s125);
-  scintillation.scintillationIndex = Math.expm1(largeScale + smallScale);
-  scintillation.alpha = 1 / Math.expm1(largeScale);
-  scintillation.beta = 1 / Math.expm1(smallScale);
-  scintillation.fadeMarginDb = Number.isNaN(probability) ? 0 : fadeMarginGammaGammaDb(1 / Math.expm1(largeScale), 1 / Math.expm1(smallScale), probability);
-  return scintillation;
+  const alpha = 1 / Math.expm1(largeScale);
+  const beta = 1 / Math.expm1(smallScale);
+  return {
+    scintillationIndex: Math.expm1(largeScale + smallScale),
+    fadeMarginDb: Number.isNaN(probability) ? 0 : fadeMarginGammaGammaDb(alpha, beta, probability),
+    alpha,
+    beta,
+  };
 }
-
-const scintillation = { scintillationIndex: 0, fadeMarginDb: 0, alpha: Infinity, beta: Infinity };

@@ -37,21 +37,35 @@ export const GAMMA_GAMMA_LOGNORMAL_SHAPE_LIMIT = 500;
  */
 export const GAMMA_GAMMA_LOGNORMAL_BLEND_START = 250;
 
-// Results of the last quadrature pass (module scratch: the hot path allocates nothing).
-let passCdf = 0;
-let passSlope = 0; // x·f(x)
-let passCurvature = 0; // x²·f′(x)
-let passPeakS = 0;
-let passNodes = 0;
+/**
+ * What one quadrature pass finds. Each caller owns one (a quantile search reuses its own across
+ * passes), so nothing is carried from one call of the module to the next.
+ */
+interface QuadraturePass {
+  /** F(x) */
+  cdf: number;
+  /** x·f(x) */
+  slope: number;
+  /** x²·f′(x) */
+  curvature: number;
+  /** node s = ln X where the integrand peaked (the next pass starts there) */
+  peakS: number;
+  /** nodes evaluated */
+  nodes: number;
+}
+
+function newQuadraturePass(): QuadraturePass {
+  return { cdf: 0, slope: 0, curvature: 0, peakS: 0, nodes: 0 };
+}
 
 const RELATIVE_CUTOFF = 1e-15;
 const MAX_NODES_PER_SIDE = 4000;
 
 /**
  * One trapezoid pass at x for shapes m ≥ a (lnGammaM = lnΓ(m), lnGammaA = lnΓ(a)), starting at s0.
- * Writes passCdf, passSlope, passCurvature and passPeakS.
+ * Writes its findings into `out`.
  */
-function quadraturePass(x: number, m: number, a: number, lnGammaM: number, lnGammaA: number, s0: number): void {
+function quadraturePass(out: QuadraturePass, x: number, m: number, a: number, lnGammaM: number, lnGammaA: number, s0: number): void {
   const h = Math.min(0.25, 0.7 / Math.sqrt(m + a));
   const logDensityConstant = m * Math.log(m) - lnGammaM;
   const logAx = Math.log(a * x);
@@ -120,11 +134,11 @@ function quadraturePass(x: number, m: number, a: number, lnGammaM: number, lnGam
       previous = size;
     }
   }
-  passCdf = h * cdfSum;
-  passSlope = h * slopeSum;
-  passCurvature = h * curvatureSum;
-  passPeakS = peakS;
-  passNodes = nodes;
+  out.cdf = h * cdfSum;
+  out.slope = h * slopeSum;
+  out.curvature = h * curvatureSum;
+  out.peakS = peakS;
+  out.nodes = nodes;
 }
 
 /** Predicted centre of the integrand in s = ln X for threshold ln x (normal approximation of ln X and ln Y). */
@@ -161,8 +175,9 @@ export function gammaGammaCdf(x: number, alpha: number, beta: number): number {
   if (x === Infinity) return 1;
   const m = Math.max(alpha, beta);
   const a = Math.min(alpha, beta);
-  quadraturePass(x, m, a, gammaln(m), gammaln(a), startingCentre(Math.log(x), m, a));
-  return Math.min(passCdf, 1);
+  const pass = newQuadraturePass();
+  quadraturePass(pass, x, m, a, gammaln(m), gammaln(a), startingCentre(Math.log(x), m, a));
+  return Math.min(pass.cdf, 1);
 }
 
 /**
@@ -180,8 +195,9 @@ export function gammaGammaPdf(x: number, alpha: number, beta: number): number {
   requirePositive('x', x);
   const m = Math.max(alpha, beta);
   const a = Math.min(alpha, beta);
-  quadraturePass(x, m, a, gammaln(m), gammaln(a), startingCentre(Math.log(x), m, a));
-  return passSlope / x;
+  const pass = newQuadraturePass();
+  quadraturePass(pass, x, m, a, gammaln(m), gammaln(a), startingCentre(Math.log(x), m, a));
+  return pass.slope / x;
 }
 
 /**
@@ -217,19 +233,6 @@ export function gammaGammaCdfSeries(x: number, alpha: number, beta: number): num
   return prefactor * (seriesPart(beta, alpha) - seriesPart(alpha, beta));
 }
 
-/** Diagnostics of the last quantile search. */
-let quantileIterations = 0;
-let startGuess = 0;
-/**
- * Starting guess ln x0 of the last {@link gammaGammaQuantile} call (diagnostics for tests and benchmarks).
- * @returns ln x0 (Cornish–Fisher estimate)
- * @see Cornish E.A., Fisher R.A., "Moments and cumulants in the specification of distributions",
- *   Revue de l'Institut International de Statistique 5, 307–320 (1937).
- */
-export function lastGammaGammaQuantileStart(): number {
-  return startGuess;
-}
-
 /**
  * Allocation-free lower quantile of the gamma-gamma law: the normalised threshold x = I_T/⟨I⟩ with
  * F(x) = p. Halley's method on ln F(e^t) = ln p with a bracket safeguard; typically 2–3 quadrature
@@ -242,7 +245,23 @@ export function lastGammaGammaQuantileStart(): number {
  * @see Al-Habash, Andrews & Phillips (2001); Halley's method (common practice).
  */
 export function gammaGammaQuantile(alpha: number, beta: number, probability: number): number {
-  return gammaGammaQuantileWithStop(alpha, beta, probability, HALLEY_STOP_STEP);
+  return gammaGammaQuantileSearch(alpha, beta, probability, HALLEY_STOP_STEP).threshold;
+}
+
+/** A gamma-gamma quantile with the work its search took (diagnostics for tests and benchmarks). */
+export interface GammaGammaQuantileSearch {
+  /** I_T/⟨I⟩ with F(I_T/⟨I⟩) = p, > 0 */
+  threshold: number;
+  /** quadrature passes the search took (0 where the log-normal law or a gamma law answers in closed form) */
+  passes: number;
+  /**
+   * ln x0 the search started from (Cornish–Fisher estimate; NaN without a search)
+   * @see Cornish E.A., Fisher R.A., "Moments and cumulants in the specification of distributions",
+   *   Revue de l'Institut International de Statistique 5, 307–320 (1937).
+   */
+  startLogThreshold: number;
+  /** nodes of the last quadrature pass (0 without a pass) */
+  lastPassNodes: number;
 }
 
 /**
@@ -274,14 +293,29 @@ const HALLEY_STOP_STEP = 2e-3;
  * @see Al-Habash, Andrews & Phillips (2001); Halley's method (common practice).
  */
 export function gammaGammaQuantileWithStop(alpha: number, beta: number, probability: number, stopStep: number): number {
+  return gammaGammaQuantileSearch(alpha, beta, probability, stopStep).threshold;
+}
+
+/**
+ * The gamma-gamma quantile search itself, returning the threshold with its diagnostics (the
+ * functions above return only the threshold).
+ *
+ * @param alpha α > 0
+ * @param beta β > 0
+ * @param probability p in (0, 1)
+ * @param stopStep stop once a Halley step in ln x is below this size (default 2e-3, as the fade margin uses)
+ * @returns the threshold I_T/⟨I⟩ and the passes, start and nodes of the search
+ * @see Al-Habash, Andrews & Phillips (2001); Halley's method (common practice).
+ */
+export function gammaGammaQuantileSearch(alpha: number, beta: number, probability: number, stopStep: number = HALLEY_STOP_STEP): GammaGammaQuantileSearch {
   if (Math.min(alpha, beta) > GAMMA_GAMMA_LOGNORMAL_SHAPE_LIMIT) {
     const scintillationIndex = 1 / alpha + 1 / beta + 1 / (alpha * beta);
-    return Math.exp(-fadeMarginLognormalDb(scintillationIndex, probability) / DB_PER_NATURAL_LOG_POWER);
+    return closedFormQuantile(Math.exp(-fadeMarginLognormalDb(scintillationIndex, probability) / DB_PER_NATURAL_LOG_POWER));
   }
   const m = alpha > beta ? alpha : beta;
   const a = alpha > beta ? beta : alpha;
   // One factor does not fluctuate: I is Gamma(a, 1/a) distributed.
-  if (m === Infinity) return gammaincinv(probability, a) / a;
+  if (m === Infinity) return closedFormQuantile(gammaincinv(probability, a) / a);
   const lnGammaM = gammaln(m);
   const lnGammaA = gammaln(a);
   // Cornish–Fisher start from the exact cumulants of ln I = ln X + ln Y.
@@ -301,26 +335,27 @@ export function gammaGammaQuantileWithStop(alpha: number, beta: number, probabil
   if (!Number.isFinite(t)) t = mean + Math.sqrt(variance) * zp;
   // A start at ±Infinity (a quantile of p rounded to 0 or 1) would never move: fall back to the median region.
   if (!Number.isFinite(t)) t = mean;
-  startGuess = t;
+  const startLogThreshold = t;
   const logP = Math.log(probability);
   let lower = -Infinity;
   let upper = Infinity;
   let centre = startingCentre(t, m, a);
-  quantileIterations = 0;
+  let passes = 0;
+  const pass = newQuadraturePass();
   // ln F(e^t) is concave in t: ln I is the sum of two log-gamma variables, whose densities are
   // log-concave; a convolution of log-concave densities is log-concave, and so is its CDF (Bagnoli
   // M., Bergstrom T., "Log-concave probability and its applications", Economic Theory 26, 445–469
   // (2005) [from memory]). The safeguarded Halley/Newton search therefore converges from any
   // finite start; the cap only bounds the work of one call.
   for (let iteration = 0; iteration < MAX_QUANTILE_PASSES; iteration++) {
-    quantileIterations++;
+    passes++;
     const x = Math.exp(t);
     let f = 0;
     // x = 0 (t below about −745): F is 0 without a pass, which would find no peak to stop at.
     if (x > 0) {
-      quadraturePass(x, m, a, lnGammaM, lnGammaA, centre);
-      centre = passPeakS;
-      f = passCdf;
+      quadraturePass(pass, x, m, a, lnGammaM, lnGammaA, centre);
+      centre = pass.peakS;
+      f = pass.cdf;
     }
     if (!(f > 0)) {
       // F underflowed: the root lies above t. Halve the way to the bracket's top, or to the mean of ln I.
@@ -331,8 +366,8 @@ export function gammaGammaQuantileWithStop(alpha: number, beta: number, probabil
     const phi = Math.log(f) - logP;
     if (phi < 0) lower = t;
     else upper = t;
-    const d1 = passSlope / f;
-    const d2 = (passSlope + passCurvature) / f - d1 * d1;
+    const d1 = pass.slope / f;
+    const d2 = (pass.slope + pass.curvature) / f - d1 * d1;
     let step = -phi / d1;
     // Halley's correction when it is well conditioned; then the cubic stop rule applies, otherwise
     // (Newton, bisection or a clamped step) only a much smaller step counts as converged.
@@ -357,25 +392,11 @@ export function gammaGammaQuantileWithStop(alpha: number, beta: number, probabil
     }
     t = next;
   }
-  return Math.exp(t);
+  return { threshold: Math.exp(t), passes, startLogThreshold, lastPassNodes: pass.nodes };
 }
 
-/**
- * Nodes of the last quadrature pass (diagnostics for tests and benchmarks).
- * @returns node count
- * @see common practice (diagnostics)
- */
-export function lastQuadratureNodes(): number {
-  return passNodes;
-}
-
-/**
- * Number of quadrature passes used by the last {@link gammaGammaQuantile} call (diagnostics).
- * @returns pass count (1 for weak or aperture-averaged scintillation)
- * @see common practice (diagnostics)
- */
-export function lastGammaGammaQuantileIterations(): number {
-  return quantileIterations;
+function closedFormQuantile(threshold: number): GammaGammaQuantileSearch {
+  return { threshold, passes: 0, startLogThreshold: Number.NaN, lastPassNodes: 0 };
 }
 
 /**

@@ -23,21 +23,23 @@ export interface GammaGammaParameters {
   scintillationIndex: number;
 }
 
-// Scratch outputs of logVariancesFast (allocation-free hot path).
-let scratchLargeScale = 0;
-let scratchSmallScale = 0;
-
 /**
- * Allocation-free core: writes σ_lnX² and σ_lnY² for a Rytov variance and normalised aperture d².
- * plane:     σ_lnX² = 0.49σ_R²/(1 + 0.65d² + 1.11σ_R^(12/5))^(7/6);
- *            σ_lnY² = 0.51σ_R²(1 + 0.69σ_R^(12/5))^(−5/6)/(1 + 0.90d² + 0.62d²σ_R^(12/5))
+ * Allocation-free core, large scale: σ_lnX² for a Rytov variance, its power σ^(12/5) (passed in so
+ * that the pair shares one Math.pow) and the normalised aperture d².
+ * plane:     σ_lnX² = 0.49σ_R²/(1 + 0.65d² + 1.11σ_R^(12/5))^(7/6)
  * spherical: 0.18d² and 0.56 instead of 0.65d² and 1.11 (β0² instead of σ_R²).
  */
-function logVariancesFast(rytov: number, apertureD2: number, spherical: boolean): void {
-  const s125 = Math.pow(rytov, 1.2);
-  const largeDenominator = 1 + (spherical ? 0.18 : 0.65) * apertureD2 + (spherical ? 0.56 : 1.11) * s125;
-  scratchLargeScale = (0.49 * rytov) / Math.pow(largeDenominator, 7 / 6);
-  scratchSmallScale = (0.51 * rytov * Math.pow(1 + 0.69 * s125, -5 / 6)) / (1 + 0.9 * apertureD2 + 0.62 * apertureD2 * s125);
+function largeScaleLogVarianceFast(rytov: number, rytovPower125: number, apertureD2: number, spherical: boolean): number {
+  const largeDenominator = 1 + (spherical ? 0.18 : 0.65) * apertureD2 + (spherical ? 0.56 : 1.11) * rytovPower125;
+  return (0.49 * rytov) / Math.pow(largeDenominator, 7 / 6);
+}
+
+/**
+ * Allocation-free core, small scale (the same for both waves):
+ * σ_lnY² = 0.51σ²(1 + 0.69σ^(12/5))^(−5/6)/(1 + 0.90d² + 0.62d²σ^(12/5)).
+ */
+function smallScaleLogVarianceFast(rytov: number, rytovPower125: number, apertureD2: number): number {
+  return (0.51 * rytov * Math.pow(1 + 0.69 * rytovPower125, -5 / 6)) / (1 + 0.9 * apertureD2 + 0.62 * apertureD2 * rytovPower125);
 }
 
 /**
@@ -78,9 +80,9 @@ export function gammaGammaParameters(input: GammaGammaParametersInput): GammaGam
   const apertureD2 = input.apertureD2 ?? 0;
   requireNonNegative('apertureD2', apertureD2);
   if (input.wave !== 'plane' && input.wave !== 'spherical') throw new RangeError(`wave: must be 'plane' or 'spherical' (got ${String(input.wave)})`);
-  logVariancesFast(input.rytovVariance, apertureD2, input.wave === 'spherical');
-  const largeScaleLogVariance = scratchLargeScale;
-  const smallScaleLogVariance = scratchSmallScale;
+  const power = Math.pow(input.rytovVariance, 1.2);
+  const largeScaleLogVariance = largeScaleLogVarianceFast(input.rytovVariance, power, apertureD2, input.wave === 'spherical');
+  const smallScaleLogVariance = smallScaleLogVarianceFast(input.rytovVariance, power, apertureD2);
   return {
     largeScaleLogVariance,
     smallScaleLogVariance,
@@ -102,8 +104,8 @@ export function gammaGammaParameters(input: GammaGammaParametersInput): GammaGam
  */
 export function scintillationIndexAllRegimes(rytov: number, wave: WaveModel): number {
   requireNonNegative('rytovVariance', rytov);
-  logVariancesFast(rytov, 0, wave === 'spherical');
-  return Math.expm1(scratchLargeScale + scratchSmallScale);
+  const power = Math.pow(rytov, 1.2);
+  return Math.expm1(largeScaleLogVarianceFast(rytov, power, 0, wave === 'spherical') + smallScaleLogVarianceFast(rytov, power, 0));
 }
 
 /**
@@ -118,8 +120,8 @@ export function scintillationIndexAllRegimes(rytov: number, wave: WaveModel): nu
 export function apertureAveragedScintillationIndex(rytov: number, wave: WaveModel, apertureD2: number): number {
   requireNonNegative('rytovVariance', rytov);
   requireNonNegative('apertureD2', apertureD2);
-  logVariancesFast(rytov, apertureD2, wave === 'spherical');
-  return Math.expm1(scratchLargeScale + scratchSmallScale);
+  const power = Math.pow(rytov, 1.2);
+  return Math.expm1(largeScaleLogVarianceFast(rytov, power, apertureD2, wave === 'spherical') + smallScaleLogVarianceFast(rytov, power, apertureD2));
 }
 
 /** Closed-form weak-turbulence aperture-averaging factors A = σ_I²(D)/σ_I²(0). */
@@ -189,8 +191,9 @@ export function weakApertureAveragingNumerical(apertureD2: number, wave: WaveMod
 export function apertureAveragedFadeMarginDb(wavelengthM: number, distanceM: number, cn2: number, apertureDiameterM: number, probability: number): number {
   if (cn2 === 0) return 0;
   const rytov = rytovVarianceFast(cn2, wavelengthM, distanceM, true);
-  logVariancesFast(rytov, normalisedApertureSquared(wavelengthM, distanceM, apertureDiameterM), true);
-  return fadeMarginGammaGammaDb(1 / Math.expm1(scratchLargeScale), 1 / Math.expm1(scratchSmallScale), probability);
+  const apertureD2 = normalisedApertureSquared(wavelengthM, distanceM, apertureDiameterM);
+  const power = Math.pow(rytov, 1.2);
+  return fadeMarginGammaGammaDb(1 / Math.expm1(largeScaleLogVarianceFast(rytov, power, apertureD2, true)), 1 / Math.expm1(smallScaleLogVarianceFast(rytov, power, apertureD2)), probability);
 }
 
 /**
@@ -207,6 +210,7 @@ export function apertureAveragedFadeMarginDb(wavelengthM: number, distanceM: num
 export function apertureAveragedScintillationIndexFast(wavelengthM: number, distanceM: number, cn2: number, apertureDiameterM: number): number {
   if (cn2 === 0) return 0;
   const rytov = rytovVarianceFast(cn2, wavelengthM, distanceM, true);
-  logVariancesFast(rytov, normalisedApertureSquared(wavelengthM, distanceM, apertureDiameterM), true);
-  return Math.expm1(scratchLargeScale + scratchSmallScale);
+  const apertureD2 = normalisedApertureSquared(wavelengthM, distanceM, apertureDiameterM);
+  const power = Math.pow(rytov, 1.2);
+  return Math.expm1(largeScaleLogVarianceFast(rytov, power, apertureD2, true) + smallScaleLogVarianceFast(rytov, power, apertureD2));
 }
