@@ -1,7 +1,7 @@
 // The design inputs a sweep or a heat map can run along, with the unit each is shown in and a
 // sensible default span around the design's own value. The engine works in SI; these are display
 // units only (the factor converts a displayed number to the field's SI value).
-import type { LinkDesignInput, VariableDesignField } from '@beamwright/link-core';
+import { designValueOf, type LinkDesignInput, type VariableDesignField } from '@beamwright/link-core';
 
 export const EXPLORE_FIELD_IDS = [
   'rangeM',
@@ -41,14 +41,11 @@ export const EXPLORE_FIELDS: Readonly<Record<ExploreFieldId, ExploreField>> = {
   'receiver.apertureDiameterM': { id: 'receiver.apertureDiameterM', label: 'Receive aperture diameter', unit: 'mm', factor: 1e-3, defaultSpacing: 'linear', span: { below: 0.25, above: 3 }, fallbackSi: 0.1 },
 };
 
-/** The design's own value of a field in SI (the engine's fallback where the design leaves it open). */
+/** The design's own value of a field in SI (link-core's designValueOf; the engine's fallback where the design leaves it open). */
 export function designValueSi(design: LinkDesignInput, field: ExploreFieldId): number {
-  const [group, key] = field.includes('.') ? (field.split('.') as [string, string]) : [undefined, field];
-  const holder = (group ? (design as unknown as Record<string, Record<string, unknown> | undefined>)[group] : design) as Record<string, unknown> | undefined;
-  const value = holder?.[key];
-  if (typeof value === 'number' && Number.isFinite(value)) return value;
-  if (field === 'atmosphere.cn2') return 0;
-  return EXPLORE_FIELDS[field].fallbackSi;
+  const value = designValueOf(design, field);
+  if (value !== undefined && Number.isFinite(value)) return value;
+  return field === 'atmosphere.cn2' ? 0 : EXPLORE_FIELDS[field].fallbackSi;
 }
 
 /** The default axis for a field, in display units, rounded to three significant figures. */
