@@ -24,7 +24,6 @@ import {
   Text,
   Title2,
   Title3,
-  createFocusOutlineStyle,
   makeStyles,
   tokens,
 } from '@fluentui/react-components';
@@ -42,24 +41,14 @@ import { getSiteLinksQueryOptions, useSiteLinks } from '@/features/sites/api/get
 import { useDeleteSite, useSaveSite } from '@/features/sites/api/save-site';
 import { SiteForm } from '@/features/sites/components/site-form';
 import { SitePlan } from '@/features/sites/components/site-plan';
+import { linkTextStyle } from '@/components/ui/link-text-style';
 
 const useStyles = makeStyles({
   page: { display: 'grid', rowGap: tokens.spacingVerticalXL },
   card: { padding: tokens.spacingHorizontalXXL, display: 'grid', rowGap: tokens.spacingVerticalL, minWidth: 0 },
   header: { display: 'flex', flexWrap: 'wrap', justifyContent: 'space-between', alignItems: 'flex-end', gap: tokens.spacingHorizontalL },
   muted: { color: tokens.colorNeutralForeground3 },
-  linkName: {
-    color: tokens.colorBrandForegroundLink,
-    fontWeight: tokens.fontWeightSemibold,
-    textDecorationLine: 'none',
-    display: 'inline-flex',
-    minHeight: '24px',
-    alignItems: 'center',
-    position: 'relative',
-    borderRadius: tokens.borderRadiusSmall,
-    ':hover': { textDecorationLine: 'underline' },
-    ...createFocusOutlineStyle(),
-  },
+  linkName: linkTextStyle,
   tableWrap: { overflowX: 'auto' },
   refusalList: { marginBlock: tokens.spacingVerticalXS, paddingInlineStart: tokens.spacingHorizontalXL },
 });

@@ -16,7 +16,6 @@ import {
   TableRow,
   Title2,
   Title3,
-  createFocusOutlineStyle,
   makeStyles,
   tokens,
 } from '@fluentui/react-components';
@@ -28,23 +27,13 @@ import { useCurrentUser } from '@/lib/auth';
 import { getSitesQueryOptions, useSites } from '@/features/sites/api/get-sites';
 import { getSitePlanLinksQueryOptions, useSitePlanLinks } from '@/features/sites/api/get-site-links';
 import { SitePlan } from '@/features/sites/components/site-plan';
+import { linkTextStyle } from '@/components/ui/link-text-style';
 
 const useStyles = makeStyles({
   header: { display: 'flex', flexWrap: 'wrap', alignItems: 'flex-end', justifyContent: 'space-between', gap: tokens.spacingHorizontalL, marginBottom: tokens.spacingVerticalL },
   subtitle: { color: tokens.colorNeutralForeground3 },
   card: { padding: 0, overflowX: 'auto', marginBottom: tokens.spacingVerticalXXL },
-  name: {
-    color: tokens.colorBrandForegroundLink,
-    fontWeight: tokens.fontWeightSemibold,
-    textDecorationLine: 'none',
-    display: 'inline-flex',
-    minHeight: '24px',
-    alignItems: 'center',
-    position: 'relative',
-    borderRadius: tokens.borderRadiusSmall,
-    ':hover': { textDecorationLine: 'underline' },
-    ...createFocusOutlineStyle(),
-  },
+  name: linkTextStyle,
   numeric: { fontVariantNumeric: 'tabular-nums' },
   section: { marginBlock: tokens.spacingVerticalL },
   empty: { padding: tokens.spacingHorizontalL, display: 'block' },

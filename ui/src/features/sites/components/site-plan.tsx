@@ -8,7 +8,6 @@ import {
   TableHeader,
   TableHeaderCell,
   TableRow,
-  createFocusOutlineStyle,
   makeStyles,
   tokens,
 } from '@fluentui/react-components';
@@ -19,6 +18,7 @@ import { ChartCard } from '@/components/charts/chart-card';
 import { LazyEChart } from '@/components/charts/lazy-echart';
 import { MarginBadge } from '@/components/ui/margin-verdict';
 import { SITE_PLAN_MARGIN_PX, formatScale, sitePlanData, sitePlanOf, sitePlanOption } from '@/features/sites/charts/site-plan-chart';
+import { linkTextStyle } from '@/components/ui/link-text-style';
 
 const useStyles = makeStyles({
   layout: {
@@ -28,18 +28,7 @@ const useStyles = makeStyles({
     alignItems: 'start',
   },
   measure: { minWidth: 0 },
-  linkName: {
-    color: tokens.colorBrandForegroundLink,
-    fontWeight: tokens.fontWeightSemibold,
-    textDecorationLine: 'none',
-    display: 'inline-flex',
-    minHeight: '24px',
-    alignItems: 'center',
-    position: 'relative',
-    borderRadius: tokens.borderRadiusSmall,
-    ':hover': { textDecorationLine: 'underline' },
-    ...createFocusOutlineStyle(),
-  },
+  linkName: linkTextStyle,
   ends: { color: tokens.colorNeutralForeground3, fontSize: tokens.fontSizeBase200, display: 'block' },
   tableWrap: { overflowX: 'auto' },
 });
